@@ -1,0 +1,145 @@
+import { sql } from "drizzle-orm";
+import {
+  boolean, index, int, mysqlEnum, mysqlTable, primaryKey, text, timestamp, uniqueIndex, varchar,
+} from "drizzle-orm/mysql-core";
+import { id, ref, utc, jsonText } from "./columns";
+
+const now = () => utc("created_at").notNull().default(sql`CURRENT_TIMESTAMP(3)`);
+
+// --- Auth.js tables (shape required by @auth/drizzle-adapter) ---------------------------------
+export const users = mysqlTable("users", {
+  id: varchar("id", { length: 255 }).primaryKey().$defaultFn(() => crypto.randomUUID()),
+  name: varchar("name", { length: 255 }),
+  email: varchar("email", { length: 255 }).notNull().unique(),
+  emailVerified: timestamp("emailVerified", { mode: "date", fsp: 3 }),
+  image: varchar("image", { length: 255 }),
+  units: mysqlEnum("units", ["mm", "in"]).notNull().default("mm"),
+  notices: mysqlEnum("notices", ["immediate", "digest"]).notNull().default("immediate"),
+  createdAt: now(),
+});
+
+export const accounts = mysqlTable("accounts", {
+  userId: varchar("userId", { length: 255 }).notNull().references(() => users.id, { onDelete: "cascade" }),
+  type: varchar("type", { length: 255 }).$type<"email" | "oauth" | "oidc" | "webauthn">().notNull(),
+  provider: varchar("provider", { length: 255 }).notNull(),
+  providerAccountId: varchar("providerAccountId", { length: 255 }).notNull(),
+  refresh_token: varchar("refresh_token", { length: 255 }),
+  access_token: varchar("access_token", { length: 255 }),
+  expires_at: int("expires_at"),
+  token_type: varchar("token_type", { length: 255 }),
+  scope: varchar("scope", { length: 255 }),
+  id_token: varchar("id_token", { length: 2048 }),
+  session_state: varchar("session_state", { length: 255 }),
+}, (t) => [primaryKey({ columns: [t.provider, t.providerAccountId] })]);
+
+export const sessions = mysqlTable("sessions", {
+  sessionToken: varchar("sessionToken", { length: 255 }).primaryKey(),
+  userId: varchar("userId", { length: 255 }).notNull().references(() => users.id, { onDelete: "cascade" }),
+  expires: timestamp("expires", { mode: "date" }).notNull(),
+  createdAt: now(),
+});
+
+export const verificationTokens = mysqlTable("verification_tokens", {
+  identifier: varchar("identifier", { length: 255 }).notNull(),
+  token: varchar("token", { length: 255 }).notNull(),
+  expires: timestamp("expires", { mode: "date" }).notNull(),
+}, (t) => [primaryKey({ columns: [t.identifier, t.token] })]);
+
+// --- Studios ------------------------------------------------------------------------------------
+export const STUDIO_ROLES = ["owner", "designer"] as const;
+
+export const studios = mysqlTable("studios", {
+  id: id(),
+  name: varchar("name", { length: 200 }).notNull(),
+  town: varchar("town", { length: 200 }).notNull().default(""),
+  /** Machines, abrasive sets and default stock (models/font studioSettingsSchema). */
+  settings: jsonText<unknown>("settings").notNull(),
+  createdAt: now(),
+});
+
+export const studioMembers = mysqlTable("studio_members", {
+  id: id(),
+  studioId: ref("studio_id").notNull().references(() => studios.id),
+  userId: varchar("user_id", { length: 255 }).notNull().references(() => users.id),
+  role: mysqlEnum("role", STUDIO_ROLES).notNull(),
+  createdAt: now(),
+}, (t) => [uniqueIndex("studio_members_studio_user").on(t.studioId, t.userId)]);
+
+// --- Commissions --------------------------------------------------------------------------------
+export const STAGES = [
+  "brief", "concept", "design-development", "approved", "in-fabrication", "installed", "handed-over",
+  "on-hold", "withdrawn",
+] as const;
+export const COMMITTEE_ROLES = ["chair", "member", "adviser"] as const;
+export const THRESHOLDS = ["majority", "two-thirds", "unanimous"] as const;
+
+export const commissions = mysqlTable("commissions", {
+  id: id(),
+  studioId: ref("studio_id").notNull().references(() => studios.id),
+  title: varchar("title", { length: 200 }).notNull(),
+  clientBody: varchar("client_body", { length: 200 }).notNull(),
+  site: varchar("site", { length: 300 }).notNull(),
+  kind: mysqlEnum("kind", ["font"]).notNull().default("font"),
+  stage: mysqlEnum("stage", STAGES).notNull().default("brief"),
+  /** "majority" or a whole number of voting members. */
+  quorum: varchar("quorum", { length: 20 }).notNull().default("majority"),
+  threshold: mysqlEnum("threshold", THRESHOLDS).notNull().default("majority"),
+  chairVotes: boolean("chair_votes").notNull().default(false),
+  /** The bylaw clause or resolution allowing electronic ballots; null = votes are taken at meetings. */
+  electronicAuthority: varchar("electronic_authority", { length: 500 }),
+  createdAt: now(),
+  updatedAt: utc("updated_at").notNull().default(sql`CURRENT_TIMESTAMP(3)`),
+}, (t) => [index("commissions_studio").on(t.studioId)]);
+
+export const commissionMembers = mysqlTable("commission_members", {
+  id: id(),
+  commissionId: ref("commission_id").notNull().references(() => commissions.id),
+  userId: varchar("user_id", { length: 255 }).notNull().references(() => users.id),
+  role: mysqlEnum("role", COMMITTEE_ROLES).notNull(),
+  treasurer: boolean("treasurer").notNull().default(false),
+  invitedBy: varchar("invited_by", { length: 255 }).references(() => users.id),
+  createdAt: now(),
+}, (t) => [uniqueIndex("commission_members_commission_user").on(t.commissionId, t.userId)]);
+
+
+// --- Decision trail (append-only; triggers in a migration refuse UPDATE and DELETE) -------------
+export const trailEvents = mysqlTable("trail_events", {
+  id: id(),
+  commissionId: ref("commission_id").notNull().references(() => commissions.id),
+  seq: int("seq", { unsigned: true }).notNull(),
+  at: utc("at").notNull(),
+  actorId: varchar("actor_id", { length: 255 }),
+  actorRole: varchar("actor_role", { length: 20 }).notNull(),
+  action: varchar("action", { length: 60 }).notNull(),
+  subjectType: varchar("subject_type", { length: 40 }).notNull(),
+  subjectId: varchar("subject_id", { length: 64 }).notNull(),
+  payload: jsonText<Record<string, unknown>>("payload").notNull(),
+  prevHash: varchar("prev_hash", { length: 64 }).notNull(),
+  hash: varchar("hash", { length: 64 }).notNull(),
+}, (t) => [uniqueIndex("trail_events_commission_seq").on(t.commissionId, t.seq)]);
+
+/** A person's own security events (sign-in and the like), apart from any commission's chain. */
+export const securityLog = mysqlTable("security_log", {
+  id: id(),
+  userId: varchar("user_id", { length: 255 }),
+  email: varchar("email", { length: 255 }),
+  at: utc("at").notNull().default(sql`CURRENT_TIMESTAMP(3)`),
+  action: varchar("action", { length: 60 }).notNull(),
+  detail: jsonText<Record<string, unknown>>("detail").notNull(),
+}, (t) => [index("security_log_user").on(t.userId)]);
+
+// --- Outbox: mail written in the same transaction as the change, sent by a worker with retries -----
+export const outbox = mysqlTable("outbox", {
+  id: id(),
+  /** One message per key, ever: a retried or repeated change never mails twice. */
+  dedupeKey: varchar("dedupe_key", { length: 191 }).notNull(),
+  toEmail: varchar("to_email", { length: 255 }).notNull(),
+  subject: varchar("subject", { length: 255 }).notNull(),
+  bodyText: text("body_text").notNull(),
+  status: mysqlEnum("status", ["pending", "sending", "sent", "failed"]).notNull().default("pending"),
+  attempts: int("attempts").notNull().default(0),
+  nextAttemptAt: utc("next_attempt_at").notNull().default(sql`CURRENT_TIMESTAMP(3)`),
+  lastError: varchar("last_error", { length: 500 }),
+  sentAt: utc("sent_at"),
+  createdAt: now(),
+}, (t) => [uniqueIndex("outbox_dedupe").on(t.dedupeKey), index("outbox_due").on(t.status, t.nextAttemptAt)]);

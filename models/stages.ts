@@ -1,0 +1,15 @@
+/** Commission stages, in the trade's words. */
+export const STAGE_LABELS = {
+  brief: "Brief",
+  concept: "Concept",
+  "design-development": "Design development",
+  approved: "Approved",
+  "in-fabrication": "In fabrication",
+  installed: "Installed",
+  "handed-over": "Handed over",
+  "on-hold": "On hold",
+  withdrawn: "Withdrawn",
+} as const;
+export type Stage = keyof typeof STAGE_LABELS;
+
+export const STAGE_ORDER: Stage[] = ["brief", "concept", "design-development", "approved", "in-fabrication", "installed", "handed-over"];
