@@ -1,0 +1,94 @@
+import * as z from "zod";
+import { GENESIS_HASH, formatIssues, trailEventSchema, type TrailEvent } from "./event";
+import type { VerifyResult } from "./verify-core";
+import { verifyChainAsync } from "./web-hash";
+
+export const RECORD_FORMAT_ID = "placet-trail/1";
+
+/** Written into every JSON record so that anyone can check it without Placet. */
+export const RECORD_FORMAT = [
+  `Placet decision trail, format ${RECORD_FORMAT_ID}.`,
+  "`events` is one commission's chain in order: seq 1, 2, 3 … without gaps.",
+  "Each event's `hash` is the lowercase hexadecimal SHA-256 (FIPS 180-4) of the UTF-8 bytes of the text",
+  "prevHash + C, with no separator: prevHash is the event's own `prevHash` field (64 lowercase hex characters;",
+  "64 zeros for event 1) and C is the RFC 8785 (JSON Canonicalization Scheme) serialisation of the event",
+  "with its `hash` field removed, so C contains prevHash as well.",
+  "Each event's `prevHash` equals the previous event's `hash`.",
+  "`finalHash` is the last event's hash (64 zeros if there are none): compare it with the final hash printed",
+  "on the decision record. Times are UTC, ISO 8601 with milliseconds.",
+].join(" ");
+
+export type TrailRecord = {
+  format: typeof RECORD_FORMAT_ID;
+  description: string;
+  commission: { id: number; title: string };
+  exportedAt: string;
+  events: TrailEvent[];
+  finalHash: string;
+};
+
+export const trailRecordSchema = z.object({
+  format: z.literal(RECORD_FORMAT_ID, { error: `must be "${RECORD_FORMAT_ID}"` }),
+  description: z.string({ error: "must be text" }),
+  commission: z.object({
+    id: z.number().int({ error: "must be a whole number" }).positive({ error: "must be 1 or more" }),
+    title: z.string({ error: "must be text" }),
+  }),
+  exportedAt: z.iso.datetime({ error: "must be a UTC time like 2026-12-01T10:00:00.000Z" }),
+  events: z.array(trailEventSchema, { error: "must be a list of events" }),
+  finalHash: z.string().regex(/^[0-9a-f]{64}$/, { error: "must be 64 lowercase hexadecimal characters" }),
+});
+
+export function buildRecord(
+  commission: { id: number; title: string },
+  events: readonly TrailEvent[],
+  opts: { exportedAt?: Date | string } = {},
+): TrailRecord {
+  const at = opts.exportedAt ?? new Date();
+  return {
+    format: RECORD_FORMAT_ID,
+    description: RECORD_FORMAT,
+    commission: { id: commission.id, title: commission.title },
+    exportedAt: typeof at === "string" ? at : at.toISOString(),
+    events: [...events],
+    finalHash: events.length > 0 ? events[events.length - 1].hash : GENESIS_HASH,
+  };
+}
+
+export type RecordErrors = { formErrors: string[]; fieldErrors: Record<string, string[] | undefined> };
+
+export type ParseRecordResult =
+  | { ok: true; record: TrailRecord }
+  | { ok: false; message: string; errors: RecordErrors };
+
+/** Checks the shape of a record (not its hashes: that is verifyRecord's job). */
+export function parseRecord(input: unknown): ParseRecordResult {
+  const parsed = trailRecordSchema.safeParse(input);
+  if (!parsed.success) {
+    return {
+      ok: false,
+      message: `This is not a Placet trail record: ${formatIssues(parsed.error)}.`,
+      errors: z.flattenError(parsed.error),
+    };
+  }
+  // Keep the events exactly as given (the schema's copies drop keys such as "__proto__").
+  const events = (input as { events: TrailEvent[] }).events;
+  return { ok: true, record: { ...parsed.data, events } };
+}
+
+/** parseRecord for the text of a file. */
+export function parseRecordText(text: string): ParseRecordResult {
+  let value: unknown;
+  try {
+    value = JSON.parse(text);
+  } catch (err) {
+    const message = `The file is not valid JSON (${(err as Error).message}).`;
+    return { ok: false, message, errors: { formErrors: [message], fieldErrors: {} } };
+  }
+  return parseRecord(value);
+}
+
+/** Verifies a parsed record in the browser against its commission id and stated final hash. */
+export function verifyRecordAsync(record: TrailRecord): Promise<VerifyResult> {
+  return verifyChainAsync(record.events, { expectedCommissionId: record.commission.id, expectedFinalHash: record.finalHash });
+}
