@@ -32,24 +32,34 @@ export const GENESIS_HASH = "0".repeat(64);
 const HEX64 = /^[0-9a-f]{64}$/;
 const ISO_MS_UTC = /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}\.\d{3}Z$/;
 
-const hex64 = z.string().regex(HEX64, { error: "must be 64 lowercase hexadecimal characters" });
-const positiveId = z.number().int({ error: "must be a whole number" }).positive({ error: "must be 1 or more" });
-const label = z.string().min(1, { error: "must not be empty" }).max(200, { error: "is too long" });
+/** A type error that says "is missing" when the field is absent. */
+export const need = (what: string) => ({
+  error: (iss: { input?: unknown }) => (iss.input === undefined ? "is missing" : `must be ${what}`),
+});
 
-export const trailEventSchema = z.strictObject({
+const hex64 = z.string(need("text")).regex(HEX64, { error: "must be 64 lowercase hexadecimal characters" });
+const positiveId = z.number(need("a number")).int({ error: "must be a whole number" }).positive({ error: "must be 1 or more" });
+const label = z.string(need("text")).min(1, { error: "must not be empty" }).max(200, { error: "is too long" });
+
+const eventShape = {
   commissionId: positiveId,
   seq: positiveId,
-  at: z.string().refine((s) => ISO_MS_UTC.test(s) && new Date(s).toISOString() === s, {
+  at: z.string(need("text")).refine((s) => ISO_MS_UTC.test(s) && new Date(s).toISOString() === s, {
     error: 'must be a UTC time like "2026-12-01T10:00:00.000Z"',
   }),
-  actorId: z.string().min(1, { error: "must not be empty" }).max(255, { error: "is too long" }).nullable(),
+  actorId: z.string(need("text or null")).min(1, { error: "must not be empty" }).max(255, { error: "is too long" }).nullable(),
   actorRole: label,
-  action: z.enum(TRAIL_ACTIONS, { error: "is not one of the trail's actions" }),
+  action: z.enum(TRAIL_ACTIONS, need("one of the trail's actions")),
   subjectType: label,
   subjectId: label,
-  payload: z.record(z.string(), z.unknown(), { error: "must be a JSON object" }),
+  payload: z.record(z.string(), z.unknown(), need("a JSON object")),
   prevHash: hex64,
   hash: hex64,
+};
+
+export const trailEventSchema = z.strictObject(eventShape, {
+  error: (iss) =>
+    iss.code === "unrecognized_keys" ? `has fields a trail event does not have: ${iss.keys.join(", ")}` : "must be a JSON object",
 }) satisfies z.ZodType<TrailEvent>;
 
 /** The event without `hash`, with exactly the fields that are hashed. */

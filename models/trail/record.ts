@@ -1,5 +1,5 @@
 import * as z from "zod";
-import { GENESIS_HASH, formatIssues, trailEventSchema, type TrailEvent } from "./event";
+import { GENESIS_HASH, formatIssues, need, trailEventSchema, type TrailEvent } from "./event";
 import type { VerifyResult } from "./verify-core";
 import { verifyChainAsync } from "./web-hash";
 
@@ -28,16 +28,16 @@ export type TrailRecord = {
 };
 
 export const trailRecordSchema = z.object({
-  format: z.literal(RECORD_FORMAT_ID, { error: `must be "${RECORD_FORMAT_ID}"` }),
-  description: z.string({ error: "must be text" }),
+  format: z.literal(RECORD_FORMAT_ID, need(`"${RECORD_FORMAT_ID}"`)),
+  description: z.string(need("text")),
   commission: z.object({
-    id: z.number().int({ error: "must be a whole number" }).positive({ error: "must be 1 or more" }),
-    title: z.string({ error: "must be text" }),
+    id: z.number(need("a number")).int({ error: "must be a whole number" }).positive({ error: "must be 1 or more" }),
+    title: z.string(need("text")),
   }),
-  exportedAt: z.iso.datetime({ error: "must be a UTC time like 2026-12-01T10:00:00.000Z" }),
-  events: z.array(trailEventSchema, { error: "must be a list of events" }),
-  finalHash: z.string().regex(/^[0-9a-f]{64}$/, { error: "must be 64 lowercase hexadecimal characters" }),
-});
+  exportedAt: z.iso.datetime(need("a UTC time like 2026-12-01T10:00:00.000Z")),
+  events: z.array(trailEventSchema, need("a list of events")),
+  finalHash: z.string(need("text")).regex(/^[0-9a-f]{64}$/, { error: "must be 64 lowercase hexadecimal characters" }),
+}, { error: "the file must hold one JSON object" });
 
 export function buildRecord(
   commission: { id: number; title: string },
