@@ -1,0 +1,34 @@
+import type { FontFieldName } from "./types";
+
+export type FontFieldKind = "length" | "angle" | "count" | "glass";
+
+export interface FontFieldInfo {
+  name: FontFieldName;
+  label: string;
+  kind: FontFieldKind;
+  group: "bowl" | "foot" | "pedestal" | "glass" | "engravings";
+  hint: string;
+}
+
+/** The fields in the order a designer fills them in, with plain labels. */
+export const fontFields: readonly FontFieldInfo[] = [
+  { name: "rimRadius", label: "Rim radius", kind: "length", group: "bowl", hint: "Inside radius at the rim" },
+  { name: "depth", label: "Depth", kind: "length", group: "bowl", hint: "Inside depth, rim to lowest point" },
+  { name: "wallThickness", label: "Wall thickness", kind: "length", group: "bowl", hint: "Glass between inside and outside" },
+  { name: "flatRadius", label: "Flat radius", kind: "length", group: "bowl", hint: "Ground flat under the bowl, for lamination" },
+  { name: "footBaseRadius", label: "Foot base radius", kind: "length", group: "foot", hint: "Where the foot stands on the pedestal" },
+  { name: "footTopRadius", label: "Foot top radius", kind: "length", group: "foot", hint: "Where the bowl's flat sits" },
+  { name: "footHeight", label: "Foot height", kind: "length", group: "foot", hint: "Solid glass foot, base to top" },
+  { name: "pedestalHeight", label: "Pedestal height", kind: "length", group: "pedestal", hint: "Floor to the top of the pedestal" },
+  { name: "glass", label: "Glass", kind: "glass", group: "glass", hint: "Sets the density used for the weights" },
+  { name: "engravingCount", label: "Number of engravings", kind: "count", group: "engravings", hint: "0 to 12, spaced evenly round the bowl" },
+  { name: "engravingStartAngle", label: "Start angle", kind: "angle", group: "engravings", hint: "Angle of the first engraving from the datum mark" },
+  { name: "engravingDrop", label: "Engraving drop", kind: "length", group: "engravings", hint: "How far below the rim the engravings' centres sit" },
+];
+
+export const fontFieldLabel = Object.fromEntries(fontFields.map((f) => [f.name, f.label])) as Record<
+  FontFieldName,
+  string
+>;
+
+export const fontFieldNames = fontFields.map((f) => f.name);

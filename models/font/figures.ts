@@ -1,0 +1,91 @@
+/**
+ * The derived figures of a font. Volumes and centroids come from integrating the lathe profile (the
+ * same outline the 3D mesh is built from); see integrate.ts.
+ */
+import { engravingLayout, type EngravingPosition } from "./engravings";
+import { integrateOutline } from "./integrate";
+import { glassMaterials, WATER_DENSITY_KG_M3 } from "./materials";
+import { fontProfile, type FontProfile } from "./profile";
+import { radToDeg, STANDARD_GRAVITY } from "./units";
+import type { FontParameters } from "./types";
+
+export interface FontFigures {
+  capacityLitres: number;
+  bowlGlassVolumeCm3: number;
+  footGlassVolumeCm3: number;
+  bowlMassKg: number;
+  footMassKg: number;
+  waterMassKg: number;
+  filledMassKg: number;
+  outerRimRadiusMm: number;
+  rimHeightMm: number;
+  centreOfMassHeightMm: number;
+  tipAngleDeg: number;
+  bearingPressureKPa: number;
+  laminationAreaCm2: number;
+  engravings: EngravingPosition[];
+  engravingArcSpacingMm: number | null;
+  /** supporting values, shown beside the figures */
+  glassDensityKgM3: number;
+  sphereRadiusMm: number;
+  flatCapHeightMm: number;
+  glassUnderInteriorMm: number;
+  engravingCircleRadiusMm: number;
+}
+
+const MM3_PER_CM3 = 1000;
+const MM3_PER_LITRE = 1e6;
+const MM3_PER_M3 = 1e9;
+
+/**
+ * Figures for parameters that passed fontParametersSchema. For raw input use evaluateFont, which
+ * validates first and never throws. An optional profile already built from the same parameters can be
+ * passed to skip rebuilding it.
+ */
+export function computeFontFigures(params: FontParameters, profile?: FontProfile): FontFigures {
+  const prof = profile ?? fontProfile(params);
+  const g = prof.geometry;
+  const density = glassMaterials[params.glass]?.densityKgM3 ?? glassMaterials["soda-lime"].densityKgM3;
+
+  const bowl = integrateOutline(prof.bowl.segments);
+  const foot = integrateOutline(prof.foot.segments);
+  const water = integrateOutline(prof.water.segments);
+
+  const bowlMassKg = (bowl.volume / MM3_PER_M3) * density;
+  const footMassKg = (foot.volume / MM3_PER_M3) * density;
+  const waterMassKg = (water.volume / MM3_PER_M3) * WATER_DENSITY_KG_M3;
+  const filledMassKg = bowlMassKg + footMassKg + waterMassKg;
+
+  const centreOfMassHeightMm =
+    (bowlMassKg * bowl.centroidZ + footMassKg * foot.centroidZ + waterMassKg * water.centroidZ) / filledMassKg;
+  const tipAngleDeg = radToDeg(Math.atan2(params.footBaseRadius, centreOfMassHeightMm - g.footBaseZ));
+
+  const baseAreaM2 = Math.PI * (params.footBaseRadius / 1000) ** 2;
+  const bearingPressureKPa = (filledMassKg * STANDARD_GRAVITY) / baseAreaM2 / 1000;
+
+  const contact = Math.min(params.flatRadius, params.footTopRadius);
+  const layout = engravingLayout(params, g);
+
+  return {
+    capacityLitres: water.volume / MM3_PER_LITRE,
+    bowlGlassVolumeCm3: bowl.volume / MM3_PER_CM3,
+    footGlassVolumeCm3: foot.volume / MM3_PER_CM3,
+    bowlMassKg,
+    footMassKg,
+    waterMassKg,
+    filledMassKg,
+    outerRimRadiusMm: g.outerRimRadius,
+    rimHeightMm: g.rimZ,
+    centreOfMassHeightMm,
+    tipAngleDeg,
+    bearingPressureKPa,
+    laminationAreaCm2: (Math.PI * contact * contact) / 100,
+    engravings: layout.engravings,
+    engravingArcSpacingMm: layout.arcSpacingMm,
+    glassDensityKgM3: density,
+    sphereRadiusMm: g.sphereRadius,
+    flatCapHeightMm: g.flatCapHeight,
+    glassUnderInteriorMm: g.glassUnderInterior,
+    engravingCircleRadiusMm: layout.circleRadiusMm,
+  };
+}
