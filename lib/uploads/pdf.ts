@@ -28,10 +28,24 @@ function decodeName(name: string): string {
   return out;
 }
 
+/** The text with stream bodies cut out, in one linear pass (no backtracking on hostile input). */
+function withoutStreams(text: string): string {
+  const start = /\bstream(?:\r\n|\n|\r)/gu;
+  let out = "";
+  let from = 0;
+  for (let m = start.exec(text); m; m = start.exec(text)) {
+    const end = text.indexOf("endstream", start.lastIndex);
+    if (end < 0) break;
+    out += text.slice(from, m.index) + " ";
+    from = end + "endstream".length;
+    start.lastIndex = from;
+  }
+  return out + text.slice(from);
+}
+
 /** Active-content names in the file's text outside streams (catches what a lenient parser skips). */
 function scanRaw(text: string): string | null {
-  const outsideStreams = text.replace(/\bstream(?:\r\n|\n|\r)[\s\S]*?endstream/gu, " ");
-  for (const match of outsideStreams.matchAll(/\/((?:[^\x00\t\n\f\r \/<>[\]()%{}]|#[0-9a-fA-F]{2})+)/gu)) {
+  for (const match of withoutStreams(text).matchAll(/\/([^\x00\t\n\f\r \/<>[\]()%{}]+)/gu)) {
     const label = ACTIVE[decodeName(match[1]!)];
     if (label) return label;
   }

@@ -29,7 +29,7 @@ export function jpegEnd(b: Uint8Array): End {
   if (b[0] !== 0xff || b[1] !== 0xd8) return "truncated";
   let i = 2;
   while (i < b.length) {
-    if (b[i] !== 0xff) return "truncated";
+    while (i < b.length && b[i] !== 0xff) i++; // stray bytes between segments, which decoders skip
     while (b[i] === 0xff) i++; // fill bytes
     const marker = b[i++];
     if (marker === undefined) return "truncated";

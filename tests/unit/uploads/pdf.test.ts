@@ -72,4 +72,11 @@ describe("PDF checks", () => {
     const ok = await expectAccepted("spec.pdf", pdf);
     expect(ok.pages).toBe(1);
   });
+
+  it("checks a PDF full of unterminated stream keywords in linear time", async () => {
+    const pdf = f.handPdfWithCatalog("", [`(${"stream\n".repeat(200_000)})`]);
+    const started = Date.now();
+    await expectAccepted("spec.pdf", pdf);
+    expect(Date.now() - started).toBeLessThan(3000);
+  });
 });
