@@ -33,7 +33,7 @@ export const trailRecordSchema = z.object({
   commission: z.object({
     id: z.number(need("a number")).int({ error: "must be a whole number" }).positive({ error: "must be 1 or more" }),
     title: z.string(need("text")),
-  }),
+  }, need("an object with id and title")),
   exportedAt: z.iso.datetime(need("a UTC time like 2026-12-01T10:00:00.000Z")),
   events: z.array(trailEventSchema, need("a list of events")),
   finalHash: z.string(need("text")).regex(/^[0-9a-f]{64}$/, { error: "must be 64 lowercase hexadecimal characters" }),
