@@ -2,7 +2,8 @@ import "server-only";
 import { desc, eq, sql } from "drizzle-orm";
 import type { Db } from "@/db/client";
 import { trailEvents } from "@/db/schema";
-import { GENESIS_HASH, hashEventSync, type TrailAction, type TrailEventBody } from "@/models/trail";
+import { GENESIS_HASH, type TrailAction, type TrailEventBody } from "@/models/trail";
+import { hashEventSync } from "@/models/trail/node-hash";
 
 export type Tx = Parameters<Parameters<Db["transaction"]>[0]>[0];
 

@@ -1,0 +1,38 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { commissionForPage } from "@/lib/page-data";
+import { Card } from "@/components/ui/card";
+import { RulesSummary } from "@/components/rules-summary";
+import { NextSteps } from "@/components/next-steps";
+import { ROLE_LABELS } from "@/models/permissions/policy";
+
+export const metadata: Metadata = { title: "Commission" };
+
+export default async function CommissionPage({ params }: { params: Promise<{ commissionId: string }> }) {
+  const { commissionId } = await params;
+  const { commission: c } = await commissionForPage(commissionId, `/commissions/${commissionId}`);
+  const committee = c.people.filter((p) => p.side === "committee");
+  return (
+    <div className="grid gap-4 lg:grid-cols-3">
+      <div className="grid gap-4 lg:col-span-2">
+        <NextSteps commission={c} />
+        <Card title="How this committee decides" action={c.rulesEditable ? <Link href={`/commissions/${c.id}/rules`} className="min-h-11 py-2">Edit the rules</Link> : undefined}>
+          <RulesSummary rules={c.rules} />
+          {!c.rulesEditable && c.you.can["rules.edit"] && <p className="mt-2 text-sm text-ink-soft">The rules are fixed now that a ballot has been held.</p>}
+        </Card>
+      </div>
+      <Card title="People" action={<Link href={`/commissions/${c.id}/people`} className="min-h-11 py-2">All people</Link>}>
+        <ul className="space-y-2">
+          {committee.map((p) => (
+            <li key={p.userId} className="flex justify-between gap-2">
+              <span>{p.name}</span>
+              <span className="text-sm text-ink-soft">{ROLE_LABELS[p.role]}{p.treasurer ? " · treasurer" : ""}</span>
+            </li>
+          ))}
+          {!committee.length && <li className="text-ink-soft">No committee members yet.</li>}
+        </ul>
+        <p className="mt-3 text-sm text-ink-soft">You take part as {ROLE_LABELS[c.yourRole as keyof typeof ROLE_LABELS]?.toLowerCase()}.</p>
+      </Card>
+    </div>
+  );
+}

@@ -1,0 +1,29 @@
+"use server";
+import { revalidatePath } from "next/cache";
+import { redirect } from "next/navigation";
+import { requireViewer } from "@/lib/session";
+import { updateRules } from "@/lib/dal/commissions";
+import { isKnownError, ValidationError } from "@/lib/errors";
+
+export interface RulesState { errors?: Record<string, string> }
+
+export async function rulesAction(commissionId: number, _prev: RulesState, form: FormData): Promise<RulesState> {
+  const mode = String(form.get("quorumMode") ?? "majority");
+  const raw = String(form.get("quorumCount") ?? "").trim();
+  const input = {
+    quorum: mode === "majority" ? "majority" : raw === "" ? undefined : Number(raw),
+    threshold: String(form.get("threshold") ?? ""),
+    chairVotes: form.get("chairVotes") === "on",
+    electronicAuthority: String(form.get("electronicAuthority") ?? "").trim() || null,
+  };
+  try {
+    await updateRules(await requireViewer(), commissionId, input);
+  } catch (err) {
+    if (err instanceof ValidationError) return { errors: err.fields };
+    if (isKnownError(err)) return { errors: { _form: err.message } };
+    console.error(err);
+    return { errors: { _form: "The rules could not be saved. Nothing was changed." } };
+  }
+  revalidatePath(`/commissions/${commissionId}`, "layout");
+  redirect(`/commissions/${commissionId}`);
+}

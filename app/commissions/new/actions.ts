@@ -1,0 +1,21 @@
+"use server";
+import { redirect } from "next/navigation";
+import { requireViewer } from "@/lib/session";
+import { createCommission } from "@/lib/dal/commissions";
+import { isKnownError, ValidationError } from "@/lib/errors";
+
+export interface NewCommissionState { errors?: Record<string, string>; values?: Record<string, string> }
+
+export async function createCommissionAction(_prev: NewCommissionState, form: FormData): Promise<NewCommissionState> {
+  const values = { title: String(form.get("title") ?? ""), clientBody: String(form.get("clientBody") ?? ""), site: String(form.get("site") ?? "") };
+  let id: number;
+  try {
+    ({ id } = await createCommission(await requireViewer(), values));
+  } catch (err) {
+    if (err instanceof ValidationError) return { errors: err.fields, values };
+    if (isKnownError(err)) return { errors: { _form: err.message }, values };
+    console.error(err);
+    return { errors: { _form: "The commission could not be created. Nothing was saved." }, values };
+  }
+  redirect(`/commissions/${id}`);
+}

@@ -1,0 +1,29 @@
+import "server-only";
+import { deliverOutbox } from "./outbox";
+
+type Job = { name: string; everyMs: number; run: () => Promise<unknown> };
+
+const g = globalThis as unknown as { __placetWorker?: boolean };
+
+/** Background jobs. Safe to run on several app nodes at once: each job claims its rows with row locks. */
+export const JOBS: Job[] = [{ name: "outbox", everyMs: 2_000, run: () => deliverOutbox() }];
+
+export function startWorker(jobs = JOBS): void {
+  if (g.__placetWorker) return;
+  g.__placetWorker = true;
+  for (const job of jobs) {
+    let busy = false;
+    const tick = async () => {
+      if (busy) return;
+      busy = true;
+      try {
+        await job.run();
+      } catch (err) {
+        console.error(`[worker] ${job.name} failed:`, (err as Error).message ?? err);
+      } finally {
+        busy = false;
+      }
+    };
+    setInterval(tick, job.everyMs).unref();
+  }
+}

@@ -1,0 +1,56 @@
+#!/usr/bin/env bash
+# npm start — everything a fresh machine needs, then the product with demo data at http://localhost:3000.
+# Ctrl-C stops what this script started.
+set -euo pipefail
+source "$(dirname "$0")/env.sh"
+cd "$ROOT"
+export PORT="${PORT:-3000}"
+
+ensure_debian
+ensure_node_modules
+
+started_db=0
+bash scripts/db.sh status >/dev/null 2>&1 || started_db=1
+bash scripts/db.sh up
+pids=()
+cleanup() {
+  trap - INT TERM EXIT
+  log "stopping…"
+  for p in "${pids[@]}"; do kill -- -"$p" 2>/dev/null || kill "$p" 2>/dev/null || true; done
+  [ -f "$DATA_DIR/maildev-$SMTP_PORT.pid" ] && { kill "$(cat "$DATA_DIR/maildev-$SMTP_PORT.pid")" 2>/dev/null || true; rm -f "$DATA_DIR/maildev-$SMTP_PORT.pid"; }
+  [ "$started_db" = 1 ] && bash scripts/db.sh down || true
+  log "stopped"
+}
+trap cleanup INT TERM EXIT
+
+npx tsx scripts/migrate.ts
+npx tsx --conditions=react-server scripts/seed.ts --if-empty
+bash scripts/mail.sh
+
+if [ "${PLACET_SKIP_BUILD:-0}" != 1 ] || [ ! -f .next/BUILD_ID ]; then
+  log "building the app (about 30 s)"
+  npx next build >"$DATA_DIR/build.log" 2>&1 || { tail -40 "$DATA_DIR/build.log"; exit 1; }
+fi
+
+setsid npx next start -H 127.0.0.1 -p "$PORT" &
+pids+=($!)
+for _ in $(seq 1 100); do curl -fs "http://127.0.0.1:$PORT/api/health" >/dev/null 2>&1 && break; sleep 0.3; done
+
+cat <<MSG
+
+  Placet is running at http://localhost:$PORT   (use "localhost", not 127.0.0.1: sign-in cookies are set for it)
+  Mail inbox (sign-in links land here): http://localhost:$MAIL_WEB_PORT
+
+  Sign in with any of these invented demo people; the link arrives in the inbox above:
+    tamsin@hollowmere.test    studio owner        (Hollowmere Glass)
+    elias@hollowmere.test     designer            (Hollowmere Glass)
+    margaret@stwenna.test     chair               (St Wenna's building committee)
+    david@stwenna.test        committee member
+    ruth@stwenna.test         committee member
+    colin@stwenna.test        committee member, treasurer
+    priya@stwenna.test        adviser (comments, no vote)
+    owen@lanternhill.test     chair of another commission (sees only his own)
+
+  npm run db:seed resets the demo. Ctrl-C stops everything.
+MSG
+wait "${pids[0]}"

@@ -1,0 +1,27 @@
+import { eq } from "drizzle-orm";
+import { closeDb, databaseUrl, getDb } from "@/db/client";
+import { resetDatabase } from "@/db/reset";
+import { seedDemo } from "@/db/seed";
+import { users } from "@/db/schema";
+import { loadViewer, type Viewer } from "@/lib/dal/viewer";
+
+/** Integration tests run against a database of their own (scripts/test.sh points DATABASE_URL at it). */
+export function assertTestDatabase() {
+  const url = databaseUrl();
+  if (!/_test/.test(new URL(url).pathname)) throw new Error(`integration tests refuse to touch ${url}`);
+}
+
+export async function freshDemo() {
+  assertTestDatabase();
+  await closeDb();
+  await resetDatabase(databaseUrl());
+  return seedDemo();
+}
+
+export async function viewer(email: string): Promise<Viewer> {
+  const [u] = await getDb().select().from(users).where(eq(users.email, email));
+  if (!u) throw new Error(`no user ${email}`);
+  return (await loadViewer(u.id))!;
+}
+
+export { getDb, closeDb };
