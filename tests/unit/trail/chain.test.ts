@@ -1,5 +1,5 @@
-import { describe, expect, it } from "vitest";
-import { GENESIS_HASH, eventBody, hashInput, verifyChainAsync, type TrailEvent } from "@/models/trail";
+import { describe, expect, it, vi } from "vitest";
+import { GENESIS_HASH, WebCryptoUnavailableError, eventBody, hashInput, verifyChainAsync, type TrailEvent } from "@/models/trail";
 import { hashEvent, sealEvent, sha256Hex, verifyChain } from "@/models/trail/node-hash";
 import { chainOf, draft } from "./fixtures";
 
@@ -142,5 +142,17 @@ describe("verifyChain", () => {
 
   it("refuses something that is not a list", async () => {
     expect(await verifyBoth({} as unknown as unknown[])).toMatchObject({ ok: false, seq: 1, reason: "malformed" });
+  });
+});
+
+describe("verifyChainAsync without WebCrypto", () => {
+  it("says plainly that the browser cannot check here (e.g. a page not served over https)", async () => {
+    vi.stubGlobal("crypto", undefined);
+    try {
+      await expect(verifyChainAsync(five())).rejects.toBeInstanceOf(WebCryptoUnavailableError);
+    } finally {
+      vi.unstubAllGlobals();
+    }
+    expect((await verifyChainAsync(five())).ok).toBe(true);
   });
 });
