@@ -143,3 +143,126 @@ export const outbox = mysqlTable("outbox", {
   sentAt: utc("sent_at"),
   createdAt: now(),
 }, (t) => [uniqueIndex("outbox_dedupe").on(t.dedupeKey), index("outbox_due").on(t.status, t.nextAttemptAt)]);
+
+// --- Revisions and their attachments ---------------------------------------------------------------
+export const REVISION_STATES = ["draft", "circulated", "superseded", "decided"] as const;
+
+export const revisions = mysqlTable("revisions", {
+  id: id(),
+  commissionId: ref("commission_id").notNull().references(() => commissions.id),
+  /** Revision 1, 2, 3 … within the commission. */
+  number: int("number", { unsigned: true }).notNull(),
+  state: mysqlEnum("state", REVISION_STATES).notNull().default("draft"),
+  /** Font parameters (models/font fontParametersSchema). */
+  params: jsonText<Record<string, unknown>>("params").notNull(),
+  /** Computed figures, frozen at circulation (null while a draft: computed on read). */
+  figures: jsonText<Record<string, unknown> | null>("figures"),
+  note: text("note").notNull(),
+  /** SHA-256 over RFC 8785 canonical JSON of the frozen content; set when circulated. */
+  contentHash: varchar("content_hash", { length: 64 }),
+  createdBy: varchar("created_by", { length: 255 }).notNull().references(() => users.id),
+  circulatedBy: varchar("circulated_by", { length: 255 }).references(() => users.id),
+  circulatedAt: utc("circulated_at"),
+  supersededAt: utc("superseded_at"),
+  createdAt: now(),
+  updatedAt: utc("updated_at").notNull().default(sql`CURRENT_TIMESTAMP(3)`),
+}, (t) => [uniqueIndex("revisions_commission_number").on(t.commissionId, t.number)]);
+
+export const ATTACHMENT_KINDS = ["png", "jpeg", "webp", "pdf"] as const;
+
+export const attachments = mysqlTable("attachments", {
+  id: id(),
+  revisionId: ref("revision_id").notNull().references(() => revisions.id),
+  commissionId: ref("commission_id").notNull().references(() => commissions.id),
+  /** Server-chosen storage keys; never derived from the uploaded name. */
+  storageKey: varchar("storage_key", { length: 200 }).notNull(),
+  thumbKey: varchar("thumb_key", { length: 200 }),
+  kind: mysqlEnum("kind", ATTACHMENT_KINDS).notNull(),
+  mime: varchar("mime", { length: 50 }).notNull(),
+  name: varchar("name", { length: 255 }).notNull(),
+  caption: varchar("caption", { length: 500 }).notNull().default(""),
+  sha256: varchar("sha256", { length: 64 }).notNull(),
+  sizeBytes: int("size_bytes", { unsigned: true }).notNull(),
+  width: int("width", { unsigned: true }),
+  height: int("height", { unsigned: true }),
+  pages: int("pages", { unsigned: true }),
+  position: int("position", { unsigned: true }).notNull().default(0),
+  uploadedBy: varchar("uploaded_by", { length: 255 }).notNull().references(() => users.id),
+  createdAt: now(),
+}, (t) => [index("attachments_revision").on(t.revisionId)]);
+
+// --- Review: comments, ballots, votes, decisions ---------------------------------------------------
+export const comments = mysqlTable("comments", {
+  id: id(),
+  revisionId: ref("revision_id").notNull().references(() => revisions.id),
+  commissionId: ref("commission_id").notNull().references(() => commissions.id),
+  /** Replies point at the thread's first comment. */
+  parentId: ref("parent_id"),
+  authorId: varchar("author_id", { length: 255 }).notNull().references(() => users.id),
+  body: text("body").notNull(),
+  /**
+   * Where it is pinned: { kind: "revision" } | { kind: "attachment", attachmentId, selector: "xywh=percent:x,y,w,h" }
+   * | { kind: "model", part, point: [x, y, z] } (model millimetres).
+   */
+  target: jsonText<Record<string, unknown>>("target").notNull(),
+  resolvedAt: utc("resolved_at"),
+  resolvedBy: varchar("resolved_by", { length: 255 }).references(() => users.id),
+  editedAt: utc("edited_at"),
+  createdAt: now(),
+}, (t) => [index("comments_revision").on(t.revisionId)]);
+
+export const ballots = mysqlTable("ballots", {
+  id: id(),
+  revisionId: ref("revision_id").notNull().references(() => revisions.id),
+  commissionId: ref("commission_id").notNull().references(() => commissions.id),
+  kind: mysqlEnum("kind", ["electronic", "meeting"]).notNull(),
+  status: mysqlEnum("status", ["open", "closed", "withdrawn"]).notNull(),
+  /** The motion, in words ("That Revision 2 be approved"). */
+  motion: varchar("motion", { length: 500 }).notNull(),
+  openedBy: varchar("opened_by", { length: 255 }).notNull().references(() => users.id),
+  openedAt: utc("opened_at").notNull(),
+  closesAt: utc("closes_at"),
+  closedAt: utc("closed_at"),
+  meetingDate: varchar("meeting_date", { length: 10 }),
+  /** Frozen when closed: rules, voting members, counts and decideBallot's result. */
+  result: jsonText<Record<string, unknown> | null>("result"),
+}, (t) => [index("ballots_revision").on(t.revisionId)]);
+
+export const VOTE_CHOICES = ["in-favour", "against", "abstain"] as const;
+
+export const votes = mysqlTable("votes", {
+  id: id(),
+  ballotId: ref("ballot_id").notNull().references(() => ballots.id),
+  userId: varchar("user_id", { length: 255 }).notNull().references(() => users.id),
+  choice: mysqlEnum("choice", VOTE_CHOICES).notNull(),
+  castAt: utc("cast_at").notNull(),
+}, (t) => [uniqueIndex("votes_ballot_user").on(t.ballotId, t.userId)]);
+
+export const DECISION_OUTCOMES = ["approved", "approved-as-noted", "revise-and-resubmit", "not-approved"] as const;
+
+export const decisions = mysqlTable("decisions", {
+  id: id(),
+  /** Exactly one decision per revision. */
+  revisionId: ref("revision_id").notNull().references(() => revisions.id),
+  commissionId: ref("commission_id").notNull().references(() => commissions.id),
+  outcome: mysqlEnum("outcome", DECISION_OUTCOMES).notNull(),
+  conditions: jsonText<string[]>("conditions").notNull(),
+  statement: text("statement").notNull(),
+  ballotId: ref("ballot_id").references(() => ballots.id),
+  contentHash: varchar("content_hash", { length: 64 }).notNull(),
+  recordedBy: varchar("recorded_by", { length: 255 }).notNull().references(() => users.id),
+  recordedAt: utc("recorded_at").notNull(),
+}, (t) => [uniqueIndex("decisions_revision").on(t.revisionId)]);
+
+/** Notices held for a person's daily digest (people who chose "digest" instead of immediate mail). */
+export const digestItems = mysqlTable("digest_items", {
+  id: id(),
+  userId: varchar("user_id", { length: 255 }).notNull().references(() => users.id),
+  commissionId: ref("commission_id").notNull().references(() => commissions.id),
+  /** One line of the digest, e.g. "Ruth Penhallow replied to your comment on Revision 2". */
+  line: varchar("line", { length: 500 }).notNull(),
+  link: varchar("link", { length: 500 }).notNull(),
+  dedupeKey: varchar("dedupe_key", { length: 191 }).notNull(),
+  createdAt: now(),
+  digestedAt: utc("digested_at"),
+}, (t) => [uniqueIndex("digest_items_dedupe").on(t.dedupeKey), index("digest_items_user").on(t.userId, t.digestedAt)]);
