@@ -4,7 +4,7 @@
  */
 import { engravingLayout, type EngravingPosition } from "./engravings";
 import { integrateOutline } from "./integrate";
-import { glassMaterials, WATER_DENSITY_KG_M3 } from "./materials";
+import { glassMaterials, WATER_DENSITY_KG_M3, type GlassKind } from "./materials";
 import { fontProfile, type FontProfile } from "./profile";
 import { radToDeg, STANDARD_GRAVITY } from "./units";
 import type { FontParameters } from "./types";
@@ -26,6 +26,7 @@ export interface FontFigures {
   engravings: EngravingPosition[];
   engravingArcSpacingMm: number | null;
   /** supporting values, shown beside the figures */
+  glass: GlassKind;
   glassDensityKgM3: number;
   sphereRadiusMm: number;
   flatCapHeightMm: number;
@@ -82,6 +83,7 @@ export function computeFontFigures(params: FontParameters, profile?: FontProfile
     laminationAreaCm2: (Math.PI * contact * contact) / 100,
     engravings: layout.engravings,
     engravingArcSpacingMm: layout.arcSpacingMm,
+    glass: params.glass,
     glassDensityKgM3: density,
     sphereRadiusMm: g.sphereRadius,
     flatCapHeightMm: g.flatCapHeight,

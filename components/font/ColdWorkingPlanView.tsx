@@ -1,0 +1,118 @@
+import {
+  formatAngle,
+  formatArea,
+  formatLength,
+  formatNumber,
+  type ColdWorkingResult,
+  type LengthUnit,
+} from "@/models/font";
+
+export interface ColdWorkingPlanViewProps {
+  plan: ColdWorkingResult;
+  units: LengthUnit;
+  className?: string;
+}
+
+/** The cold-working plan: surfaces with stock and handwheel turns, the abrasive stages, the marking-out list. */
+export function ColdWorkingPlanView({ plan, units, className = "" }: ColdWorkingPlanViewProps) {
+  if (!plan.ok) {
+    return (
+      <div className={`rounded-lg border border-danger bg-danger-soft p-4 text-sm text-danger ${className}`} role="status">
+        <p className="font-semibold">The cold-working plan cannot be made yet:</p>
+        <ul className="mt-1 list-disc pl-5">
+          {plan.problems.map((p, i) => (
+            <li key={i}>{p.message}</li>
+          ))}
+        </ul>
+      </div>
+    );
+  }
+  const L = (mm: number) => formatLength(mm, units);
+  const stages = plan.surfaces[0]?.stages ?? [];
+  return (
+    <section className={`grid gap-4 font-sans text-sm ${className}`} data-testid="cold-working-plan">
+      <p className="text-ink-soft">
+        On the {plan.machine.name}, one full turn of the handwheel lowers the head {L(plan.machine.downfeedPerTurnMm)}. Abrasives:{" "}
+        {plan.abrasiveSet.name}.
+      </p>
+      <div className="overflow-x-auto">
+        <table className="w-full border-collapse text-left">
+          <caption className="sr-only">Worked surfaces</caption>
+          <thead>
+            <tr className="border-b border-line text-ink-soft">
+              <th scope="col" className="py-2 pr-3 font-medium">Surface</th>
+              <th scope="col" className="py-2 pr-3 font-medium">Area</th>
+              <th scope="col" className="py-2 pr-3 font-medium">Stock to remove</th>
+              <th scope="col" className="py-2 font-medium">Handwheel turns</th>
+            </tr>
+          </thead>
+          <tbody>
+            {plan.surfaces.map((s) => (
+              <tr key={s.surface} className="border-b border-line last:border-b-0">
+                <th scope="row" className="py-2 pr-3 font-medium text-ink">{s.label}</th>
+                <td className="py-2 pr-3 tabular-nums">{formatArea(s.areaCm2, units)}</td>
+                <td className="py-2 pr-3 tabular-nums">
+                  {L(s.stockMm)}
+                  {s.formMm > 0 && (
+                    <span className="block text-xs text-ink-soft">
+                      {L(s.allowanceMm)} allowance + {L(s.formMm)} ground off to make the flat
+                    </span>
+                  )}
+                </td>
+                <td className="py-2 tabular-nums">{formatNumber(s.handwheelTurns, 2)}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+      <div>
+        <h4 className="mb-1 font-serif text-base font-semibold">Stages for each surface, in order</h4>
+        <ol className="list-decimal space-y-0.5 pl-6">
+          {stages.map((st) => (
+            <li key={st.order}>
+              {st.kind === "grind" ? "Grind" : "Polish"} with {st.label}
+              {st.abrasive ? <span className="text-ink-soft"> ({st.abrasive})</span> : null}
+            </li>
+          ))}
+        </ol>
+      </div>
+      <div>
+        <h4 className="mb-1 font-serif text-base font-semibold">Marking out the engravings</h4>
+        {plan.engravingMarks.length === 0 ? (
+          <p className="text-ink-soft">No engravings to mark out.</p>
+        ) : (
+          <>
+            <p className="mb-2 text-ink-soft">
+              Measure from the datum mark along the outer edge of the rim (circumference {L(plan.rimCircumferenceMm)}),
+              anticlockwise seen from above, then drop down the outside.
+            </p>
+            <table className="w-full border-collapse text-left">
+              <caption className="sr-only">Engraving marks</caption>
+              <thead>
+                <tr className="border-b border-line text-ink-soft">
+                  <th scope="col" className="py-2 pr-3 font-medium">Mark</th>
+                  <th scope="col" className="py-2 pr-3 font-medium">Angle</th>
+                  <th scope="col" className="py-2 pr-3 font-medium">Along the rim</th>
+                  <th scope="col" className="py-2 font-medium">Below the rim</th>
+                </tr>
+              </thead>
+              <tbody>
+                {plan.engravingMarks.map((m) => (
+                  <tr key={m.index} className="border-b border-line last:border-b-0 tabular-nums">
+                    <th scope="row" className="py-2 pr-3 font-medium">{m.index + 1}</th>
+                    <td className="py-2 pr-3">{formatAngle(m.angleDeg)}</td>
+                    <td className="py-2 pr-3">{L(m.arcFromDatumMm)}</td>
+                    <td className="py-2">{L(m.dropBelowRimMm)}</td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          </>
+        )}
+      </div>
+      {plan.notes.map((n, i) => (
+        <p key={i} className="text-ink-soft">{n}</p>
+      ))}
+    </section>
+  );
+}

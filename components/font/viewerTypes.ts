@@ -1,0 +1,27 @@
+import type { FontParameters, FontPart, LengthUnit } from "@/models/font";
+
+/** A point on the model in model millimetres: x, y across the floor, z up from the floor. */
+export type PointMm = [x: number, y: number, z: number];
+
+export interface ViewerPin {
+  id: string;
+  part: FontPart;
+  point: PointMm;
+  label: string;
+}
+
+export interface FontViewerProps {
+  params: FontParameters;
+  /** an older form drawn faintly behind, for comparing revisions */
+  ghostParams?: FontParameters | null;
+  pins?: ViewerPin[];
+  /** called when someone clicks or taps a point on the model (not at the end of a drag) */
+  onPickPoint?: (part: FontPart, pointMm: PointMm) => void;
+  /** units for the text summary */
+  units?: LengthUnit;
+  initialSection?: boolean;
+  initialWater?: boolean;
+  /** accessible name of the picture; defaults to "3D view of the font" */
+  label?: string;
+  className?: string;
+}
