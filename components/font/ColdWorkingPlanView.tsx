@@ -3,6 +3,7 @@ import {
   formatArea,
   formatLength,
   formatNumber,
+  mmToIn,
   type ColdWorkingResult,
   type LengthUnit,
 } from "@/models/font";
@@ -32,8 +33,9 @@ export function ColdWorkingPlanView({ plan, units, className = "" }: ColdWorking
   return (
     <section className={`grid gap-4 font-sans text-sm ${className}`} data-testid="cold-working-plan">
       <p className="text-ink-soft">
-        On the {plan.machine.name}, one full turn of the handwheel lowers the head {L(plan.machine.downfeedPerTurnMm)}. Abrasives:{" "}
-        {plan.abrasiveSet.name}.
+        Machine: {plan.machine.name}. One full turn of its handwheel lowers the head{" "}
+        {formatNumber(plan.machine.downfeedPerTurnMm, 3)} mm ({formatNumber(mmToIn(plan.machine.downfeedPerTurnMm), 3)} in).
+        Abrasives: {plan.abrasiveSet.name}.
       </p>
       <div className="overflow-x-auto">
         <table className="w-full border-collapse text-left">
@@ -50,7 +52,7 @@ export function ColdWorkingPlanView({ plan, units, className = "" }: ColdWorking
             {plan.surfaces.map((s) => (
               <tr key={s.surface} className="border-b border-line last:border-b-0">
                 <th scope="row" className="py-2 pr-3 font-medium text-ink">{s.label}</th>
-                <td className="py-2 pr-3 tabular-nums">{formatArea(s.areaCm2, units)}</td>
+                <td className="whitespace-nowrap py-2 pr-3 tabular-nums">{formatArea(s.areaCm2, units)}</td>
                 <td className="py-2 pr-3 tabular-nums">
                   {L(s.stockMm)}
                   {s.formMm > 0 && (
@@ -59,7 +61,7 @@ export function ColdWorkingPlanView({ plan, units, className = "" }: ColdWorking
                     </span>
                   )}
                 </td>
-                <td className="py-2 tabular-nums">{formatNumber(s.handwheelTurns, 2)}</td>
+                <td className="whitespace-nowrap py-2 tabular-nums">{formatNumber(s.handwheelTurns, 2)}</td>
               </tr>
             ))}
           </tbody>
