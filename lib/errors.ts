@@ -41,11 +41,21 @@ export class ConflictError extends Error {
   }
 }
 
-export type KnownError = NotFoundError | ForbiddenError | UnauthenticatedError | ValidationError | ConflictError;
+/** The person must confirm who they are again (a fresh sign-in) before this step, e.g. the chair signing a decision. */
+export class FreshSignInRequired extends Error {
+  readonly status = 428;
+  readonly code = "fresh-sign-in-required";
+  constructor(message = "Confirm it is you: sign in again by e-mail link, then record this.") {
+    super(message);
+    this.name = "FreshSignInRequired";
+  }
+}
+
+export type KnownError = NotFoundError | ForbiddenError | UnauthenticatedError | ValidationError | ConflictError | FreshSignInRequired;
 
 export function isKnownError(err: unknown): err is KnownError {
   return (
     err instanceof NotFoundError || err instanceof ForbiddenError || err instanceof UnauthenticatedError ||
-    err instanceof ValidationError || err instanceof ConflictError
+    err instanceof ValidationError || err instanceof ConflictError || err instanceof FreshSignInRequired
   );
 }

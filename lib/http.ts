@@ -17,6 +17,7 @@ export function errorResponse(err: unknown): Response {
   if (isKnownError(err)) {
     const body: Record<string, unknown> = { error: err.message };
     if (err instanceof ValidationError) body.fields = err.fields;
+    if ("code" in err) body.code = err.code;
     return NextResponse.json(body, { status: err.status });
   }
   console.error(err);
