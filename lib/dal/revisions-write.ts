@@ -52,10 +52,13 @@ export async function updateDraft(viewer: Viewer, commissionId: number, number: 
   const db = getDb();
   const { access, revision } = await loadRevision(db, viewer, commissionId, number);
   if (!access.actor.studioRole) throw new ConflictError("Only the studio edits revisions.");
+  const frozen = editRefusal(revision.state, revision.number);
+  if (frozen) throw new ConflictError(frozen);
   const note = input.note === undefined ? revision.note : checkNote(input.note);
   let params = revision.params;
   if (input.params !== undefined) {
-    const ev = evaluateFont(input.params);
+    if (!input.params || typeof input.params !== "object" || Array.isArray(input.params)) throw new ValidationError({ params: "The model's parameters must be an object." });
+    const ev = evaluateFont({ ...revision.params, ...(input.params as Record<string, unknown>) });
     if (!ev.ok) throw new ValidationError(fontErrors(ev.fieldErrors, ev.formErrors));
     params = ev.params as unknown as Record<string, unknown>;
   }

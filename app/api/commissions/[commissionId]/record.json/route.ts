@@ -1,15 +1,14 @@
 import { handle } from "@/lib/http";
 import { requireViewer } from "@/lib/session";
 import { exportRecord } from "@/lib/dal/trail";
-import { NotFoundError } from "@/lib/errors";
+import { idParam } from "@/lib/route-ids";
 
 export const dynamic = "force-dynamic";
 
 /** The commission's decision trail as a JSON record anyone can verify offline. */
 export const GET = handle(async (_req: Request, ctx: { params: Promise<{ commissionId: string }> }) => {
   const { commissionId } = await ctx.params;
-  if (!/^\d{1,15}$/.test(commissionId)) throw new NotFoundError();
-  const record = await exportRecord(await requireViewer(), Number(commissionId));
+  const record = await exportRecord(await requireViewer(), idParam(commissionId));
   return new Response(JSON.stringify(record, null, 2), {
     headers: {
       "content-type": "application/json; charset=utf-8",
