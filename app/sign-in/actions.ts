@@ -7,6 +7,7 @@ import { signIn, signOut } from "@/lib/auth";
 import { logSecurity } from "@/lib/security-log";
 import { fieldErrors, signInSchema } from "@/models/schemas/people";
 import { safeNext } from "@/lib/safe-next";
+import { signInLinksRecently, SIGN_IN_LINKS_PER_WINDOW } from "@/lib/rate-limit";
 
 export interface SignInState { errors?: Record<string, string>; email?: string }
 
@@ -21,7 +22,10 @@ export async function requestSignInLink(_prev: SignInState, form: FormData): Pro
   const email = parsed.data.email;
   const next = safeNext(String(form.get("next") ?? ""));
   const [known] = await getDb().select({ id: users.id }).from(users).where(eq(users.email, email)).limit(1);
-  if (known) {
+  if (known && (await signInLinksRecently(email)) >= SIGN_IN_LINKS_PER_WINDOW) {
+    // Too many links asked for this address lately: send no more, but answer as usual.
+    await logSecurity({ userId: known.id, email, action: "sign-in link withheld: too many requests", detail: {} });
+  } else if (known) {
     try {
       await signIn("nodemailer", { email, redirect: false, redirectTo: next });
       await logSecurity({ userId: known.id, email, action: "sign-in link sent", detail: {} });
