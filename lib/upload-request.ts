@@ -1,0 +1,69 @@
+import "server-only";
+import { NextResponse } from "next/server";
+import { ValidationError } from "./errors";
+import { MAX_FILE_BYTES } from "./uploads/limits";
+
+/** Room for the multipart boundaries, part headers and a caption beside one file of the largest size. */
+export const UPLOAD_OVERHEAD_BYTES = 256 * 1024;
+export const MAX_UPLOAD_REQUEST_BYTES = MAX_FILE_BYTES + UPLOAD_OVERHEAD_BYTES;
+
+const TOO_LARGE = "The file is over the limit of 25 MB per file. Make it smaller (for a photo, export it at a lower size) and try again.";
+
+/** The answer for a request body over the limit: 413, with the message against the file field. */
+export function tooLarge(): Response {
+  return NextResponse.json({ error: TOO_LARGE, fields: { file: TOO_LARGE } }, { status: 413 });
+}
+
+/** Reads the body, stopping as soon as it passes `limit` bytes (a missing or false Content-Length included). */
+async function readCapped(req: Request, limit: number): Promise<Uint8Array<ArrayBuffer> | null> {
+  if (!req.body) return new Uint8Array(0);
+  const reader = req.body.getReader();
+  const parts: Uint8Array[] = [];
+  let total = 0;
+  for (;;) {
+    const { done, value } = await reader.read();
+    if (done) break;
+    total += value.byteLength;
+    if (total > limit) {
+      await reader.cancel().catch(() => undefined);
+      return null;
+    }
+    parts.push(value);
+  }
+  return new Uint8Array(Buffer.concat(parts));
+}
+
+export interface UploadForm {
+  name: string;
+  bytes: Uint8Array;
+  caption: string | null;
+}
+
+/**
+ * One file (field `file`) and an optional `caption` from a multipart/form-data request, or a Response
+ * refusing it as too large. Anything else malformed is a ValidationError naming the file field.
+ */
+export async function readUploadForm(req: Request): Promise<UploadForm | Response> {
+  const type = req.headers.get("content-type") ?? "";
+  if (!/^multipart\/form-data;/iu.test(type)) {
+    throw new ValidationError({ file: "Send the file as a form upload (multipart/form-data), one file per request." });
+  }
+  const declared = Number(req.headers.get("content-length") ?? "0");
+  if (Number.isFinite(declared) && declared > MAX_UPLOAD_REQUEST_BYTES) return tooLarge();
+  const body = await readCapped(req, MAX_UPLOAD_REQUEST_BYTES);
+  if (!body) return tooLarge();
+  let form: FormData;
+  try {
+    form = await new Response(body, { headers: { "content-type": type } }).formData();
+  } catch {
+    throw new ValidationError({ file: "The upload could not be read; it may have been cut off. Try again." });
+  }
+  const files = form.getAll("file");
+  if (files.length === 0) throw new ValidationError({ file: "Choose a file to upload." });
+  if (files.length > 1) throw new ValidationError({ file: "Send one file per request." });
+  const file = files[0];
+  if (typeof file === "string") throw new ValidationError({ file: "Choose a file to upload: the form sent text instead of a file." });
+  const caption = form.get("caption");
+  if (caption !== null && typeof caption !== "string") throw new ValidationError({ caption: "The caption must be text." });
+  return { name: file.name, bytes: new Uint8Array(await file.arrayBuffer()), caption };
+}
