@@ -1,12 +1,17 @@
 import "server-only";
 import { deliverOutbox } from "./outbox";
+import { closeDueBallots } from "./dal/ballot-core";
 
 type Job = { name: string; everyMs: number; run: () => Promise<unknown> };
 
 const g = globalThis as unknown as { __placetWorker?: boolean };
 
 /** Background jobs. Safe to run on several app nodes at once: each job claims its rows with row locks. */
-export const JOBS: Job[] = [{ name: "outbox", everyMs: 2_000, run: () => deliverOutbox() }];
+export const JOBS: Job[] = [
+  { name: "outbox", everyMs: 2_000, run: () => deliverOutbox() },
+  // Ballots are also closed on every read; this closes the ones nobody is looking at, on time.
+  { name: "ballots", everyMs: 15_000, run: () => closeDueBallots() },
+];
 
 export function startWorker(jobs = JOBS): void {
   if (g.__placetWorker) return;

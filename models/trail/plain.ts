@@ -3,6 +3,12 @@ import type { TrailEvent } from "./event";
 const ROLE: Record<string, string> = {
   owner: "studio owner", designer: "designer", chair: "chair", member: "committee member", adviser: "adviser", system: "Placet",
 };
+const CHOICE: Record<string, string> = { "in-favour": "voted in favour", against: "voted against", abstain: "abstained" };
+const CHOICE_NOW: Record<string, string> = { "in-favour": "in favour", against: "against", abstain: "abstaining" };
+const OUTCOME: Record<string, string> = { carried: "carried", failed: "failed", "no-quorum": "no quorum" };
+const cap = (t: string) => t.charAt(0).toUpperCase() + t.slice(1);
+/** An ISO instant as "2026-12-05 18:00 UTC"; anything else as written. */
+const when = (v: unknown) => (typeof v === "string" && /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}/.test(v) ? `${v.slice(0, 16).replace("T", " ")} UTC` : s(v));
 const s = (v: unknown) => (typeof v === "string" ? v : v === undefined || v === null ? "" : JSON.stringify(v));
 
 /** One plain sentence for an event, from its action and payload (the actor's name is shown beside it). */
@@ -27,13 +33,16 @@ export function describeEvent(e: Pick<TrailEvent, "action" | "payload" | "subjec
     case "comment edited": return `Edited a comment on Revision ${s(p.number)}.`;
     case "comment resolved": return `Marked a comment thread on Revision ${s(p.number)} resolved.`;
     case "comment reopened": return `Reopened a comment thread on Revision ${s(p.number)}.`;
-    case "ballot opened": return `Opened a ballot on Revision ${s(p.number)}, closing ${s(p.closesAt)}.`;
-    case "vote cast": return `Voted ${s(p.choice)} on Revision ${s(p.number)}.`;
-    case "vote changed": return `Changed their vote to ${s(p.choice)} on Revision ${s(p.number)}.`;
-    case "ballot closed": return `The ballot on Revision ${s(p.number)} closed: ${s(p.outcome)} (${s(p.inFavour)} in favour, ${s(p.against)} against, ${s(p.abstain)} abstaining).`;
+    case "ballot opened": return `Opened a ballot on Revision ${s(p.number)}, closing ${when(p.closesAt)}.`;
+    case "vote cast": return `${cap(CHOICE[s(p.choice)] ?? `voted ${s(p.choice)}`)} on Revision ${s(p.number)}.`;
+    case "vote changed": return `Changed their vote on Revision ${s(p.number)}: now ${CHOICE_NOW[s(p.choice)] ?? s(p.choice)}${p.previous ? `, was ${CHOICE_NOW[s(p.previous)] ?? s(p.previous)}` : ""}.`;
+    case "ballot closed": return `The ballot on Revision ${s(p.number)} closed${p.closedBy === "closing time" ? " at its closing time" : ""}: ${OUTCOME[s(p.outcome)] ?? s(p.outcome)} (${s(p.inFavour)} in favour, ${s(p.against)} against, ${s(p.abstain)} abstaining).`;
     case "ballot withdrawn": return `The ballot on Revision ${s(p.number)} was withdrawn${p.reason ? `: ${s(p.reason)}` : "."}`;
-    case "meeting vote recorded": return `Recorded the vote taken at the meeting of ${s(p.meetingDate)} on Revision ${s(p.number)}: ${s(p.outcome)}.`;
-    case "decision recorded": return `Recorded the decision on Revision ${s(p.number)}: ${s(p.outcomeLabel) || s(p.outcome)}.`;
+    case "meeting vote recorded": return `Recorded the vote taken at the meeting of ${s(p.meetingDate)} on Revision ${s(p.number)}: ${OUTCOME[s(p.outcome)] ?? s(p.outcome)} (${s(p.inFavour)} in favour, ${s(p.against)} against, ${s(p.abstain)} abstaining).`;
+    case "decision recorded": {
+      const n = Array.isArray(p.conditions) ? p.conditions.length : 0;
+      return `Recorded the decision on Revision ${s(p.number)}: ${s(p.outcomeLabel) || s(p.outcome)}${n ? ` (${n} condition${n === 1 ? "" : "s"})` : ""}.`;
+    }
     case "studio settings changed": return "Changed the studio's settings.";
     default: return `${e.action[0].toUpperCase()}${e.action.slice(1)}.`;
   }
