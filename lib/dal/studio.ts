@@ -1,7 +1,7 @@
 import "server-only";
-import { eq } from "drizzle-orm";
+import { asc, eq } from "drizzle-orm";
 import { getDb } from "@/db/client";
-import { studios } from "@/db/schema";
+import { studioMembers, studios, users } from "@/db/schema";
 import { demoStudioSettings, studioSettingsSchema, type StudioSettings } from "@/models/font";
 import { ForbiddenError, ValidationError } from "../errors";
 import { logSecurity } from "../security-log";
@@ -23,8 +23,13 @@ export async function settingsForCommission(viewer: Viewer, commissionId: number
 
 export async function getStudio(viewer: Viewer) {
   const mine = requireStudio(viewer);
-  const [s] = await getDb().select().from(studios).where(eq(studios.id, mine.studioId));
-  return { id: s.id, name: s.name, town: s.town, role: mine.role, settings: parseSettings(s.settings) };
+  const db = getDb();
+  const [s] = await db.select().from(studios).where(eq(studios.id, mine.studioId));
+  const staff = await db
+    .select({ name: users.name, email: users.email, role: studioMembers.role })
+    .from(studioMembers).innerJoin(users, eq(users.id, studioMembers.userId))
+    .where(eq(studioMembers.studioId, mine.studioId)).orderBy(asc(studioMembers.role), asc(users.name));
+  return { id: s.id, name: s.name, town: s.town, role: mine.role, settings: parseSettings(s.settings), staff };
 }
 
 /** The owner changes the studio's machines, abrasive sets and default stock. */
