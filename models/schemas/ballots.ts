@@ -30,16 +30,17 @@ export function parseChoice(input: unknown): Parsed<VoteChoice> {
 }
 
 export function parseOpenBallot(input: unknown, now: Date): Parsed<{ closesAt: Date; motion: string | null }> {
-  const r = z.object({ closesAt: z.unknown(), motion: motionSchema }, { error: "Send the closing time." }).safeParse(input ?? {});
-  if (!r.success) return { ok: false, errors: fieldErrors(r.error) };
-  const raw = r.data.closesAt;
+  const o = (input && typeof input === "object" ? input : {}) as Record<string, unknown>;
+  const motion = motionSchema.safeParse(o.motion);
+  if (!motion.success) return { ok: false, errors: { motion: motion.error.issues[0].message } };
+  const raw = o.closesAt;
   const when = typeof raw === "string" && ZONED.test(raw.trim()) ? new Date(raw.trim()) : null;
   if (!when || Number.isNaN(when.getTime())) return { ok: false, errors: { closesAt: "Give the closing date and time." } };
   if (when.getTime() <= now.getTime()) return { ok: false, errors: { closesAt: "The closing time must be in the future." } };
   if (when.getTime() - now.getTime() > MAX_BALLOT_DAYS * DAY_MS) {
     return { ok: false, errors: { closesAt: `A ballot can stay open for at most ${MAX_BALLOT_DAYS} days.` } };
   }
-  return { ok: true, data: { closesAt: when, motion: r.data.motion || null } };
+  return { ok: true, data: { closesAt: when, motion: motion.data || null } };
 }
 
 const count = (what: string) =>
