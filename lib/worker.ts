@@ -1,6 +1,7 @@
 import "server-only";
 import { deliverOutbox } from "./outbox";
 import { closeDueBallots } from "./dal/ballot-core";
+import { sendDigests } from "./digest";
 
 type Job = { name: string; everyMs: number; run: () => Promise<unknown> };
 
@@ -11,6 +12,8 @@ export const JOBS: Job[] = [
   { name: "outbox", everyMs: 2_000, run: () => deliverOutbox() },
   // Ballots are also closed on every read; this closes the ones nobody is looking at, on time.
   { name: "ballots", everyMs: 15_000, run: () => closeDueBallots() },
+  // Daily digests of comment notices: checked every ten minutes, each person mailed at most once a day.
+  { name: "digests", everyMs: 600_000, run: () => sendDigests() },
 ];
 
 export function startWorker(jobs = JOBS): void {
