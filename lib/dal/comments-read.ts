@@ -43,7 +43,9 @@ export async function loadThreads(db: Db, access: Access, revision: RevisionRow,
     return {
       ...dto(r), number: i + 1, target,
       targetLabel: describeTarget(target, { attachmentName: (id) => files.get(id), units: viewer.units }),
-      resolved: r.resolvedAt ? { at: r.resolvedAt.toISOString(), by: author(r.resolvedBy ?? "").name } : null,
+      resolved: r.resolvedAt !== null,
+      resolvedAt: r.resolvedAt?.toISOString() ?? null,
+      resolvedBy: r.resolvedAt ? author(r.resolvedBy ?? "").name : null,
       replies: replies.get(r.id) ?? [],
     };
   });

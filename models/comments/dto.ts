@@ -25,7 +25,10 @@ export interface ThreadDto extends CommentDto {
   target: CommentTarget;
   /** Where it is pinned, in words ("on drawing “West elevation” at 25% across, 40% down"). */
   targetLabel: string;
-  resolved: { at: string; by: string } | null;
+  /** Resolved by the studio: folded away but kept, with when and by whom. */
+  resolved: boolean;
+  resolvedAt: string | null;
+  resolvedBy: string | null;
   replies: CommentDto[];
 }
 

@@ -82,7 +82,7 @@ describe("who may comment and see comments", () => {
     const { id } = await postComment(v, rev.id, { body: `A thought from the ${who}.` });
     const list = await listComments(v, rev.id);
     const t = list.threads.find((x) => x.id === id)!;
-    expect(t).toMatchObject({ body: `A thought from the ${who}.`, target: { kind: "revision" }, targetLabel: "on the whole revision", resolved: null });
+    expect(t).toMatchObject({ body: `A thought from the ${who}.`, target: { kind: "revision" }, targetLabel: "on the whole revision", resolved: false, resolvedBy: null });
     expect(t.author.name).toBe(v.name);
     expect(list.you.canComment).toBe(true);
     expect(list.you.canResolve).toBe(who === "owner" || who === "designer");
@@ -194,11 +194,12 @@ describe("threads, edits and resolving", () => {
     expect(await resolveThread(await as("designer"), reply.id)).toEqual({ id, changed: true }); // via a reply: the thread
     expect(await resolveThread(await as("owner"), id)).toEqual({ id, changed: false });
     const t = (await listComments(await as("member"), rev.id)).threads.find((x) => x.id === id)!;
-    expect(t.resolved).toMatchObject({ by: "Elias Brandt" });
+    expect(t).toMatchObject({ resolved: true, resolvedBy: "Elias Brandt" });
+    expect(t.resolvedAt).not.toBeNull();
     expect(t.replies).toHaveLength(1);
     for (const who of ["chair", "member", "adviser"] as Who[]) await expectRefused(reopenThread(await as(who), id), ForbiddenError);
     expect(await reopenThread(await as("owner"), id)).toEqual({ id, changed: true });
-    expect((await listComments(await as("member"), rev.id)).threads.find((x) => x.id === id)!.resolved).toBeNull();
+    expect((await listComments(await as("member"), rev.id)).threads.find((x) => x.id === id)!.resolved).toBe(false);
     expect(await trailFor("comment resolved", id)).toHaveLength(1);
     expect(await trailFor("comment reopened", id)).toHaveLength(1);
   });

@@ -13,11 +13,11 @@ const elias = { id: "b1c2d3e4-f5a6-4b7c-8d9e-0f1a2b3c4d5e", name: "Elias Brandt"
 const threads: AnnotatableThread[] = [
   {
     id: 11, body: "Is the rim <b>too thin</b>?", author: ruth, createdAt: "2026-12-01T10:00:00.000Z", editedAt: "2026-12-01T10:04:00.000Z",
-    target: tapTarget(7, 25, 40), resolved: null,
+    target: tapTarget(7, 25, 40), resolved: false,
     replies: [{ id: 14, body: "It is 12 mm; we can go to 15.", author: elias, createdAt: "2026-12-01T11:00:00.000Z", editedAt: null }],
   },
-  { id: 12, body: "Happy with the proportions.", author: elias, createdAt: "2026-12-01T10:30:00.000Z", editedAt: null, target: { kind: "revision" }, resolved: { at: "2026-12-02T09:00:00.000Z", by: "Elias Brandt" }, replies: [] },
-  { id: 13, body: "Chip risk here.", author: ruth, createdAt: "2026-12-01T12:00:00.000Z", editedAt: null, target: modelPointTarget("bowl", [210, -35.5, 830]), resolved: null, replies: [] },
+  { id: 12, body: "Happy with the proportions.", author: elias, createdAt: "2026-12-01T10:30:00.000Z", editedAt: null, target: { kind: "revision" }, resolved: true, replies: [] },
+  { id: 13, body: "Chip risk here.", author: ruth, createdAt: "2026-12-01T12:00:00.000Z", editedAt: null, target: modelPointTarget("bowl", [210, -35.5, 830]), resolved: false, replies: [] },
 ];
 
 describe("comments as a Web Annotation collection (Web Annotation Data Model, W3C Recommendation 2017)", () => {
