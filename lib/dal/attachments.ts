@@ -67,6 +67,18 @@ async function deleteQuietly(keys: (string | null | undefined)[]) {
 }
 
 /**
+ * May this viewer add a file to this revision now? Lets the upload route refuse before it reads a body
+ * of up to 25 MB; addAttachment checks all of it again.
+ */
+export async function checkCanAttach(viewer: Viewer, revisionId: number): Promise<void> {
+  const db = getDb();
+  const { access, revision } = await loadRevisionById(db, viewer, revisionId);
+  requireEditable(access, revision);
+  const room = countCheck(await fileCount(db, revision.id), 1);
+  if (!room.ok) throw new ValidationError({ file: room.message });
+}
+
+/**
  * Adds one file to a draft revision. The file is checked by its content, stored under keys the server
  * chooses, and recorded with its trail event in one transaction; if that fails, the stored bytes go too.
  */

@@ -6,7 +6,7 @@ import { createHash } from "node:crypto";
 import sharp from "sharp";
 import { and, count, eq } from "drizzle-orm";
 import { attachments, trailEvents } from "@/db/schema";
-import { addAttachment, listAttachments, readAttachment, removeAttachment, updateCaption } from "@/lib/dal/attachments";
+import { addAttachment, checkCanAttach, listAttachments, readAttachment, removeAttachment, updateCaption } from "@/lib/dal/attachments";
 import { createDraft, circulate, updateDraft } from "@/lib/dal/revisions-write";
 import { ConflictError, ForbiddenError, NotFoundError, ValidationError } from "@/lib/errors";
 import { resetStorage } from "@/lib/storage";
@@ -220,6 +220,8 @@ describe("who may see and change files", () => {
     await expect(readAttachment(ruth, first.id, "file")).rejects.toBeInstanceOf(NotFoundError);
     await expect(readAttachment(ruth, first.id, "thumb")).rejects.toBeInstanceOf(NotFoundError);
     await expect(listAttachments(ruth, draft.id)).rejects.toBeInstanceOf(NotFoundError);
+    await expect(checkCanAttach(ruth, draft.id)).rejects.toBeInstanceOf(NotFoundError);
+    await expect(checkCanAttach(elias, draft.id)).resolves.toBeUndefined();
     await expect(addAttachment(ruth, draft.id, { name: "x.png", bytes: await f.png(16, 16) })).rejects.toBeInstanceOf(NotFoundError);
     await expect(removeAttachment(ruth, first.id)).rejects.toBeInstanceOf(NotFoundError);
     await expect(updateCaption(ruth, first.id, "mine")).rejects.toBeInstanceOf(NotFoundError);
@@ -244,6 +246,7 @@ describe("a circulated revision is frozen", () => {
     const add = await addAttachment(elias, draft.id, { name: "late.png", bytes: await f.png(16, 16) }).catch((e) => e);
     expect(add).toBeInstanceOf(ConflictError);
     expect(add.message).toMatch(/circulated and is frozen/);
+    await expect(checkCanAttach(elias, draft.id)).rejects.toBeInstanceOf(ConflictError);
     await expect(removeAttachment(elias, first.id)).rejects.toBeInstanceOf(ConflictError);
     await expect(updateCaption(elias, first.id, "changed")).rejects.toBeInstanceOf(ConflictError);
     expect(await listing()).toEqual(before.files);

@@ -15,6 +15,13 @@ describe("serving a stored file", () => {
     expect(res.headers.get("cache-control")).toBe("private, max-age=3600");
     expect(new Uint8Array(await res.arrayBuffer())).toEqual(new Uint8Array([1, 2, 3]));
   });
+  it("answers 304 when the browser already holds this exact file", () => {
+    const file = { bytes: new Uint8Array([1]), mime: "application/pdf", downloadName: "revision-attachment-8.pdf", sha256: "cd".repeat(32) };
+    const res = fileResponse(file, new Request("http://localhost/", { headers: { "if-none-match": `"${"cd".repeat(32)}"` } }));
+    expect(res.status).toBe(304);
+    expect(res.headers.get("content-security-policy")).toBe("sandbox; default-src 'none'");
+    expect(fileResponse(file, new Request("http://localhost/", { headers: { "if-none-match": '"other"' } })).status).toBe(200);
+  });
   it("refuses to serve anything that is not one of the four stored types", () => {
     expect(() => fileResponse({ bytes: new Uint8Array(1), mime: "text/html", downloadName: "x.html", sha256: null })).toThrow();
   });

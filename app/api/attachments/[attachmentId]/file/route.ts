@@ -7,8 +7,8 @@ import { fileResponse } from "@/lib/file-response";
 export const dynamic = "force-dynamic";
 
 /** The stored file (re-encoded images; PDFs as checked), for whoever may see its revision. */
-export const GET = handle(async (_req: Request, ctx: { params: Promise<{ attachmentId: string }> }) => {
+export const GET = handle(async (req: Request, ctx: { params: Promise<{ attachmentId: string }> }) => {
   const viewer = await requireViewer();
   const attachmentId = idParam((await ctx.params).attachmentId);
-  return fileResponse(await readAttachment(viewer, attachmentId, "file"));
+  return fileResponse(await readAttachment(viewer, attachmentId, "file"), req);
 });

@@ -1,7 +1,7 @@
 import { handle } from "@/lib/http";
 import { requireViewer } from "@/lib/session";
 import { idParam } from "@/lib/route-ids";
-import { addAttachment, listAttachments } from "@/lib/dal/attachments";
+import { addAttachment, checkCanAttach, listAttachments } from "@/lib/dal/attachments";
 import { readUploadForm } from "@/lib/upload-request";
 
 export const dynamic = "force-dynamic";
@@ -19,6 +19,7 @@ export const GET = handle(async (_req: Request, ctx: Ctx) => {
 export const POST = handle(async (req: Request, ctx: Ctx) => {
   const viewer = await requireViewer();
   const revisionId = idParam((await ctx.params).revisionId);
+  await checkCanAttach(viewer, revisionId); // before reading a body of up to 25 MB
   const form = await readUploadForm(req);
   if (form instanceof Response) return form;
   const attachment = await addAttachment(viewer, revisionId, form);
