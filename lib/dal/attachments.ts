@@ -5,7 +5,7 @@ import { getDb, type Db } from "@/db/client";
 import { attachments, revisions } from "@/db/schema";
 import { can } from "@/models/permissions/policy";
 import { editRefusal } from "@/models/revision";
-import { countCheck, inspectUpload } from "../uploads";
+import { countCheck, inspectUpload, safeDisplayName } from "../uploads";
 import { getStorage } from "../storage";
 import { ConflictError, ForbiddenError, NotFoundError, ValidationError } from "../errors";
 import { appendTrail, lockCommission, type Tx } from "../trail";
@@ -87,8 +87,9 @@ export async function addAttachment(viewer: Viewer, revisionId: number, input: {
   const { access, revision } = await loadRevisionById(db, viewer, revisionId);
   requireEditable(access, revision);
   const caption = checkCaption(input.caption);
+  const full = (message: string) => new ValidationError({ file: `“${safeDisplayName(input.name)}” cannot be added: ${message}` });
   const room = countCheck(await fileCount(db, revision.id), 1);
-  if (!room.ok) throw new ValidationError({ file: room.message });
+  if (!room.ok) throw full(room.message);
   const result = await inspectUpload({ name: typeof input.name === "string" ? input.name : "", bytes: input.bytes });
   if (!result.ok) throw new ValidationError({ file: result.message });
 
@@ -102,7 +103,7 @@ export async function addAttachment(viewer: Viewer, revisionId: number, input: {
       await lockCommission(tx, revision.commissionId);
       const fresh = await freshRevision(tx, revision.id);
       const again = countCheck(await fileCount(tx, fresh.id), 1);
-      if (!again.ok) throw new ValidationError({ file: again.message });
+      if (!again.ok) throw full(again.message);
       const [{ last }] = await tx.select({ last: max(attachments.position) }).from(attachments).where(eq(attachments.revisionId, fresh.id));
       const [res] = await tx.insert(attachments).values({
         revisionId: fresh.id, commissionId: fresh.commissionId, storageKey: key, thumbKey, kind: result.kind, mime: result.mime,

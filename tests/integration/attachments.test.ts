@@ -126,7 +126,7 @@ describe("hostile and broken files are refused, and nothing is left behind", () 
     }));
     await getDb().insert(attachments).values(filler);
     try {
-      await expectRefusedAndNothingStored("one-more.png", await f.png(32, 32), new RegExp(`at most ${MAX_FILES_PER_REVISION} files.*it is full`));
+      await expectRefusedAndNothingStored("one-more.png", await f.png(32, 32), new RegExp(`“one-more\\.png” cannot be added: .*at most ${MAX_FILES_PER_REVISION} files.*it is full`));
     } finally {
       await getDb().delete(attachments).where(and(eq(attachments.revisionId, draft.id), eq(attachments.sha256, "0".repeat(64))));
     }
