@@ -138,3 +138,66 @@ async function revisionId(commissionId: number): Promise<number> {
   const [r] = await sql<{ id: number }[]>("SELECT id FROM revisions WHERE commission_id = ? AND number = 1", [commissionId]);
   return r.id;
 }
+
+test("every ballot and decision route refuses those without the right, and nothing changes", async ({ page, browser }, info) => {
+  test.setTimeout(180_000);
+  const baseURL = String(info.project.use.baseURL ?? "http://localhost:3100");
+  await signInAs(page, await makePerson("designer"));
+  const { title, commissionId } = await ownCirculatedCommission(page);
+  const rid = await revisionId(commissionId);
+  const as = async (email: string) => {
+    const ctx = await browser.newContext({ baseURL });
+    const p = await ctx.newPage();
+    await signInAs(p, email);
+    return p.request;
+  };
+  const chair = await as(await makePerson("chair", { commissionTitle: title }));
+  const member = await as(await makePerson("member", { commissionTitle: title }));
+  const adviser = await as(await makePerson("adviser", { commissionTitle: title }));
+  const outsider = await as(await makePerson("member", { commissionTitle: "Font and cover for the new chapel" }));
+  const designer = page.request;
+
+  // Bad input names the field; it is never a 500.
+  const bad = await chair.post(`/api/revisions/${rid}/ballot`, { data: { closesAt: "soon" } });
+  expect(bad.status()).toBe(422);
+  expect((await bad.json()).fields.closesAt).toContain("closing date");
+  const notJson = await chair.post(`/api/revisions/${rid}/ballot`, { data: "{not json", headers: { "content-type": "application/json" } });
+  expect(notJson.status()).toBe(422);
+
+  const opened = await chair.post(`/api/revisions/${rid}/ballot`, { data: { closesAt: new Date(Date.now() + 86_400_000).toISOString() } });
+  expect(opened.status()).toBe(201);
+  const bid = (await opened.json()).ballot.id as number;
+
+  const count = async () => JSON.stringify(await sql(
+    `SELECT (SELECT COUNT(*) FROM ballots WHERE commission_id = ?) b, (SELECT COUNT(*) FROM votes v JOIN ballots x ON x.id = v.ballot_id WHERE x.commission_id = ?) v,
+            (SELECT COUNT(*) FROM decisions WHERE commission_id = ?) d, (SELECT COUNT(*) FROM trail_events WHERE commission_id = ?) t`, [commissionId, commissionId, commissionId, commissionId]));
+  const before = await count();
+  const today = new Date().toISOString().slice(0, 10);
+  const calls: [string, unknown][] = [
+    [`/api/revisions/${rid}/ballot`, { closesAt: new Date(Date.now() + 86_400_000).toISOString() }],
+    [`/api/ballots/${bid}/close`, {}],
+    [`/api/revisions/${rid}/meeting-vote`, { meetingDate: today, counts: { inFavour: 1, against: 0, abstain: 0 } }],
+    [`/api/revisions/${rid}/decision`, { outcome: "revise-and-resubmit" }],
+    [`/api/revisions/${rid}/decision/sign-in-link`, {}],
+  ];
+  for (const [url, data] of calls) {
+    for (const who of [member, adviser, designer]) expect((await who.post(url, { data })).status(), url).toBe(403);
+    expect((await outsider.post(url, { data })).status(), url).toBe(404);
+  }
+  for (const who of [adviser, designer, chair]) expect((await who.post(`/api/ballots/${bid}/votes`, { data: { choice: "in-favour" } })).status()).toBe(403);
+  expect((await outsider.post(`/api/ballots/${bid}/votes`, { data: { choice: "in-favour" } })).status()).toBe(404);
+  expect((await outsider.get(`/api/revisions/${rid}/ballot`)).status()).toBe(404);
+  expect((await outsider.get(`/api/revisions/${rid}/decision`)).status()).toBe(404);
+  const anonymous = await (await browser.newContext({ baseURL })).request;
+  expect((await anonymous.post(`/api/ballots/${bid}/votes`, { data: { choice: "in-favour" } })).status()).toBe(401);
+  expect(await count()).toBe(before);
+
+  // The one who may, can; and the adviser and the studio see who voted how.
+  expect((await member.post(`/api/ballots/${bid}/votes`, { data: { choice: "abstain" } })).status()).toBe(200);
+  for (const who of [adviser, designer]) {
+    const state = await (await who.get(`/api/revisions/${rid}/ballot`)).json();
+    expect(state.tally).toMatchObject({ abstain: 1, ballotsCast: 1 });
+    expect(state.whoVotedHow.filter((v: { choice: string | null }) => v.choice === "abstain")).toHaveLength(1);
+    expect(state.youMayVote).toBe(false);
+  }
+});
