@@ -1,5 +1,5 @@
 import { formatLength, formatNumber, type LengthUnit } from "@/models/font";
-import { boxCentre, isTap, parsePercentSelector } from "./fragment";
+import { boxCentre, isTap, normalisePercentSelector, parsePercentSelector } from "./fragment";
 import { PART_LABELS, type CommentTarget } from "./schema";
 
 /** Only the author edits a comment, and only within this long of posting it. */
@@ -26,7 +26,8 @@ export function describeTarget(target: CommentTarget, opts: { attachmentName?: (
     case "attachment": {
       const name = opts.attachmentName?.(target.attachmentId);
       const where = name ? `on drawing “${name}”` : "on a drawing";
-      const box = parsePercentSelector(target.selector);
+      const canonical = normalisePercentSelector(target.selector);
+      const box = canonical ? parsePercentSelector(canonical) : null;
       if (!box) return where;
       if (isTap(box)) {
         const c = boxCentre(box);

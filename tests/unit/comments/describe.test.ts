@@ -11,6 +11,8 @@ describe("where a comment is pinned, in words", () => {
     expect(describeTarget({ kind: "attachment", attachmentId: 4, selector: "xywh=percent:10,20,30,40" }, { attachmentName: names }))
       .toBe("on drawing “West elevation”, the area 10–40% across and 20–60% down");
     expect(describeTarget(tapTarget(9, 50, 50), { attachmentName: names })).toBe("on a drawing at 50% across, 50% down");
+    // As a device may send it before the server stores the canonical form:
+    expect(describeTarget({ kind: "attachment", attachmentId: 4, selector: "xywh=percent:30.12,40.70,0,0" }, { attachmentName: names })).toBe("on drawing “West elevation” at 30% across, 41% down");
   });
   it("a point on the model, in the viewer's units", () => {
     expect(describeTarget(modelPointTarget("bowl", [210, 0, 830]))).toBe("on the bowl, 830 mm up and 210 mm out from the centre");
