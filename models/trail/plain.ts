@@ -9,6 +9,8 @@ const OUTCOME: Record<string, string> = { carried: "carried", failed: "failed", 
 const cap = (t: string) => t.charAt(0).toUpperCase() + t.slice(1);
 /** An ISO instant as "2026-12-05 18:00 UTC"; anything else as written. */
 const when = (v: unknown) => (typeof v === "string" && /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}/.test(v) ? `${v.slice(0, 16).replace("T", " ")} UTC` : s(v));
+/** People's words, quoted and cut to a line (the full text stays in the payload). */
+const said = (v: unknown) => { const t = s(v).replace(/\s+/g, " ").trim(); return `“${t.length > 160 ? `${t.slice(0, 157)}…` : t}”`; };
 const s = (v: unknown) => (typeof v === "string" ? v : v === undefined || v === null ? "" : JSON.stringify(v));
 
 /** One plain sentence for an event, from its action and payload (the actor's name is shown beside it). */
@@ -29,8 +31,13 @@ export function describeEvent(e: Pick<TrailEvent, "action" | "payload" | "subjec
     case "attachment removed": return `Removed "${s(p.name)}" from Revision ${s(p.number)}.`;
     case "revision circulated": return `Circulated Revision ${s(p.number)} to the committee (content hash ${s(p.contentHash).slice(0, 12)}…).`;
     case "revision superseded": return `Revision ${s(p.number)} was superseded by Revision ${s(p.by)}.`;
-    case "comment posted": return `Commented on Revision ${s(p.number)}.`;
-    case "comment edited": return `Edited a comment on Revision ${s(p.number)}.`;
+    case "comment posted": {
+      const t = p.target as { kind?: string; part?: string } | undefined;
+      const where = t?.kind === "attachment" ? " (on a drawing)" : t?.kind === "model" ? ` (on the ${s(t.part)})` : "";
+      const what = p.body ? `: ${said(p.body)}` : ".";
+      return p.parentId ? `Replied to a comment on Revision ${s(p.number)}${what}` : `Commented on Revision ${s(p.number)}${where}${what}`;
+    }
+    case "comment edited": return `Edited a comment on Revision ${s(p.number)}${p.to ? `, now reading ${said(p.to)}` : "."}`;
     case "comment resolved": return `Marked a comment thread on Revision ${s(p.number)} resolved.`;
     case "comment reopened": return `Reopened a comment thread on Revision ${s(p.number)}.`;
     case "ballot opened": return `Opened a ballot on Revision ${s(p.number)}, closing ${when(p.closesAt)}.`;
