@@ -77,7 +77,8 @@ export function Gallery({ attachments, editable = false, onChanged, renderOverla
         </ul>
       )}
       {open !== null && images[open] && (
-        <ImageViewer images={images} index={open} onIndex={setOpen} onClose={close} renderOverlay={renderOverlay} onImageClick={onImageClick} />
+        <ImageViewer images={images} index={open} onIndex={setOpen} onClose={close} renderOverlay={renderOverlay}
+          onImageClick={onImageClick ? (a, x, y) => { onImageClick(a, x, y); close(); } : undefined} />
       )}
     </div>
   );

@@ -11,11 +11,12 @@ export function assertTestDatabase() {
   if (!/_test/.test(new URL(url).pathname)) throw new Error(`integration tests refuse to touch ${url}`);
 }
 
-export async function freshDemo() {
+/** Resets the test database to the demo people and commissions; revisions only when asked for. */
+export async function freshDemo(opts: { revisions?: boolean } = {}) {
   assertTestDatabase();
   await closeDb();
   await resetDatabase(databaseUrl());
-  return seedDemo();
+  return seedDemo({ revisions: opts.revisions ?? false });
 }
 
 export async function viewer(email: string): Promise<Viewer> {

@@ -27,9 +27,10 @@ async function withBallot(choices: ("in-favour" | "against" | "abstain")[]) {
   return rev;
 }
 
-async function expectRefused(call: () => Promise<unknown>, type: new (...a: never[]) => Error, says?: RegExp) {
+// eslint-disable-next-line @typescript-eslint/no-explicit-any
+async function expectRefused(call: () => Promise<unknown>, type: new (...a: never[]) => Error, says?: RegExp): Promise<any> {
   const before = await snapshot(ids.commissionId);
-  const err = await call().catch((e) => e);
+  const err = (await call().then(() => undefined, (e: unknown) => e)) as Error & { fields?: Record<string, string> };
   expect(err).toBeInstanceOf(type);
   if (says) expect(err.message).toMatch(says);
   expect(await snapshot(ids.commissionId)).toEqual(before);
