@@ -14,8 +14,8 @@ interface Props {
 /** "= 0.06 in" under a downfeed typed in mm, and the other way round. */
 function otherUnit(m: MachineDraft, unit: LengthUnit): string {
   const mm = entryMm(m.downfeed, unit);
-  if (mm === null) return "Downfeed is how far the grinding head comes down for one full turn of the handwheel.";
-  return unit === "mm" ? `That is ${formatNumber(mmToIn(mm), 4)} in per turn.` : `That is ${formatNumber(mm, 3)} mm per turn.`;
+  if (mm === null || mm <= 0) return "Downfeed is how far the grinding head comes down for one full turn of the handwheel.";
+  return unit === "mm" ? `That is ${mmToIn(mm).toFixed(4).replace(/0$/, "")} in per turn.` : `That is ${formatNumber(mm, 3)} mm per turn.`;
 }
 
 export function MachinesFields({ machines, unit, errors, onChange }: Props) {

@@ -64,7 +64,7 @@ export function SettingsForm({ initial, initialUnits, save }: Props) {
         <FormError message={errors._form} />
         {count > 0 && (
           <p role="alert" className="text-sm font-medium text-danger" data-testid="settings-errors">
-            {count === 1 ? "One value needs" : `${count} values need`} attention; see the message beside it. Nothing was saved.
+            {count === 1 ? "One value needs" : `${count} values need`} attention: see the {count === 1 ? "message beside it" : "messages beside them"}. Nothing was saved.
           </p>
         )}
         <p role="status" className="text-sm text-ok" data-testid="settings-saved">{saved ? "Saved. New cold-working plans use these settings." : ""}</p>

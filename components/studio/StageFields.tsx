@@ -24,8 +24,8 @@ export function StageFields({ path, stages, errors, onChange }: Props) {
         return (
           <li key={s.key} className="rounded-md border border-line bg-paper p-3" data-testid={`${p}`}>
             <p className="mb-2 text-sm font-semibold">Stage {i + 1}</p>
-            <div className="grid gap-x-3 sm:grid-cols-2">
-              <div className="mb-3">
+            <div className="grid grid-cols-2 gap-x-3">
+              <div className="col-span-2 mb-3 sm:col-span-1">
                 <label htmlFor={`${p}.kind`} className="block text-sm font-medium">Grinding or polishing</label>
                 <select id={`${p}.kind`} value={s.kind} className={select} aria-invalid={kindError ? true : undefined}
                   aria-describedby={kindError ? `${p}.kind-error` : undefined}
@@ -39,10 +39,10 @@ export function StageFields({ path, stages, errors, onChange }: Props) {
                 error={errors[`${p}.grit`]} hint={i === 0 ? "A larger number is finer." : undefined} />
               <Input id={`${p}.gritScale`} label="Grit scale" value={s.gritScale} list="grit-scales" maxLength={40}
                 onChange={(gritScale) => set(i, { gritScale })} error={errors[`${p}.gritScale`]} />
-              <Input id={`${p}.abrasive`} label="Abrasive (optional)" value={s.abrasive} maxLength={120}
+              <Input id={`${p}.abrasive`} className="col-span-2 sm:col-span-1" label="Abrasive (optional)" value={s.abrasive} maxLength={120}
                 onChange={(abrasive) => set(i, { abrasive })} error={errors[`${p}.abrasive`]} />
             </div>
-            <div className="flex flex-wrap gap-2">
+            <div className="flex flex-wrap gap-1">
               <Button type="button" variant="quiet" disabled={i === 0} onClick={() => onChange(move(stages, i, -1), true)}>
                 Move up<span className="sr-only"> stage {i + 1}</span>
               </Button>
@@ -51,7 +51,7 @@ export function StageFields({ path, stages, errors, onChange }: Props) {
               </Button>
               {stages.length > 1 && (
                 <Button type="button" variant="quiet" onClick={() => onChange(stages.filter((_, j) => j !== i), true)}>
-                  Remove stage {i + 1}
+                  Remove<span className="sr-only"> stage {i + 1}</span>
                 </Button>
               )}
             </div>

@@ -1,7 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { FontEditor } from "@/components/font";
-import { ColdWorkingSafety } from "@/components/studio/ColdWorkingSafety";
 import { studioForPage } from "../studio-for-page";
 
 export const metadata: Metadata = { title: "Sketchpad" };
@@ -11,7 +10,7 @@ export default async function SketchpadPage() {
   return (
     <div className="grid gap-4">
       <div>
-        <p className="text-sm text-ink-soft"><Link href="/studio">{studio.name}</Link></p>
+        <Link href="/studio" className="inline-flex min-h-11 items-center text-sm">{studio.name}</Link>
         <h1 className="text-3xl font-semibold">Sketchpad</h1>
         <p className="text-ink-soft">
           Try a form and see its figures and cold-working plan with the studio&apos;s own machines and abrasives.
@@ -19,7 +18,6 @@ export default async function SketchpadPage() {
         </p>
       </div>
       <FontEditor studioSettings={studio.settings} initialUnits={viewer.units} />
-      <ColdWorkingSafety />
     </div>
   );
 }
