@@ -11,7 +11,8 @@ interface Props {
 
 /**
  * Older, newer and the change, one row a value. On a phone each row stacks: the name on its own line,
- * then three short columns under it, so nothing scrolls sideways on a narrow screen.
+ * then three short columns under it, so nothing scrolls sideways on a narrow screen; an unchanged value
+ * takes a single dimmed line.
  */
 export function CompareTable({ caption, rows, olderLabel, newerLabel, onlyChanges, testId }: Props) {
   const shown = onlyChanges ? rows.filter((r) => r.change) : rows;
@@ -29,28 +30,7 @@ export function CompareTable({ caption, rows, olderLabel, newerLabel, onlyChange
           </tr>
         </thead>
         <tbody className="max-sm:block">
-          {shown.map((r) => (
-            <tr key={r.key} data-changed={r.change ? "yes" : "no"} data-testid={`row-${r.key}`}
-              className={`border-b border-line last:border-b-0 max-sm:grid max-sm:grid-cols-3 max-sm:gap-x-2 max-sm:px-4 max-sm:py-2 ${r.change ? "" : "text-ink-soft"}`}>
-              <th scope="row" className={`px-4 py-2 text-left align-top max-sm:col-span-3 max-sm:px-0 max-sm:py-0 ${r.change ? "font-semibold text-ink" : "font-normal"}`}>
-                {r.label}
-              </th>
-              <td className="px-2 py-2 align-top tabular-nums max-sm:px-0">
-                <span className="block text-xs text-ink-soft sm:hidden">{olderLabel}</span>{r.older}
-              </td>
-              <td className={`px-2 py-2 align-top tabular-nums max-sm:px-0 ${r.change ? "font-semibold text-ink" : ""}`}>
-                <span className="block text-xs font-normal text-ink-soft sm:hidden">{newerLabel}</span>{r.newer}
-              </td>
-              <td className="px-4 py-2 align-top tabular-nums max-sm:px-0">
-                <span className="block text-xs text-ink-soft sm:hidden">Change</span>
-                {r.change ? (
-                  <span className="inline-block rounded bg-record-soft px-1.5 font-semibold text-ink" data-testid="change">{r.change}</span>
-                ) : (
-                  <span>No change</span>
-                )}
-              </td>
-            </tr>
-          ))}
+          {shown.map((r) => (r.change ? <ChangedRow key={r.key} r={r} o={olderLabel} n={newerLabel} /> : <SameRow key={r.key} r={r} />))}
           {shown.length === 0 && (
             <tr className="max-sm:block"><td colSpan={4} className="px-4 py-3 text-ink-soft max-sm:block">Nothing here changed.</td></tr>
           )}
@@ -58,5 +38,34 @@ export function CompareTable({ caption, rows, olderLabel, newerLabel, onlyChange
       </table>
       {hidden > 0 && <p className="px-4 pb-3 text-xs text-ink-soft">{hidden === 1 ? "One value" : `${hidden} values`} unchanged and hidden.</p>}
     </div>
+  );
+}
+
+const cell = "py-2 align-top tabular-nums";
+
+function ChangedRow({ r, o, n }: { r: CompareRow; o: string; n: string }) {
+  return (
+    <tr data-changed="yes" data-testid={`row-${r.key}`}
+      className="border-b border-line last:border-b-0 max-sm:grid max-sm:grid-cols-3 max-sm:gap-x-2 max-sm:px-4 max-sm:py-2">
+      <th scope="row" className="px-4 py-2 text-left align-top font-semibold text-ink max-sm:col-span-3 max-sm:p-0">{r.label}</th>
+      <td className={`${cell} px-2 max-sm:p-0`}><span className="block text-xs text-ink-soft sm:hidden">{o}</span>{r.older}</td>
+      <td className={`${cell} px-2 font-semibold max-sm:p-0`}><span className="block text-xs font-normal text-ink-soft sm:hidden">{n}</span>{r.newer}</td>
+      <td className={`${cell} px-4 max-sm:p-0`}>
+        <span className="block text-xs text-ink-soft sm:hidden">Change</span>
+        <span className="inline-block rounded bg-record-soft px-1.5 font-semibold text-ink" data-testid="change">{r.change}</span>
+      </td>
+    </tr>
+  );
+}
+
+function SameRow({ r }: { r: CompareRow }) {
+  return (
+    <tr data-changed="no" data-testid={`row-${r.key}`}
+      className="border-b border-line text-ink-soft last:border-b-0 max-sm:flex max-sm:justify-between max-sm:gap-3 max-sm:px-4 max-sm:py-1.5">
+      <th scope="row" className="px-4 py-2 text-left align-top font-normal max-sm:p-0">{r.label}</th>
+      <td className={`${cell} px-2 max-sm:hidden`}>{r.older}</td>
+      <td className={`${cell} px-2 max-sm:p-0 max-sm:text-right`}>{r.newer}<span className="sm:hidden"> · same</span></td>
+      <td className={`${cell} px-4 max-sm:hidden`}>No change</td>
+    </tr>
   );
 }

@@ -1,6 +1,6 @@
 "use client";
 import { useMemo, useState } from "react";
-import type { LengthUnit } from "@/models/font";
+import { formatList, type LengthUnit } from "@/models/font";
 import { FontCautions, FontViewer } from "@/components/font";
 import { UnitsToggle } from "@/components/revision/UnitsToggle";
 import { CopyHash } from "@/components/copy-hash";
@@ -19,6 +19,13 @@ function HashLine({ side, role }: { side: CompareSide; role: "older" | "newer" }
       {side.contentHash ? <CopyHash hash={side.contentHash} label={`content hash of Revision ${side.number}`} /> : <span className="text-ink-soft">· no content hash until it is circulated</span>}
     </li>
   );
+}
+
+function summary(changed: number, parameters: string[]): string {
+  if (changed === 0) return "No values changed.";
+  const count = changed === 1 ? "One value changed" : `${changed} values changed`;
+  if (!parameters.length) return `${count}.`;
+  return `${count}, from ${parameters.length === 1 ? "one parameter" : `${parameters.length} parameters`}: ${formatList(parameters)}.`;
 }
 
 /** Two revisions side by side: what changed, in words and in the 3D view. */
@@ -41,6 +48,20 @@ export function CompareView({ older, newer, initialUnits }: { older: CompareSide
         </ul>
       </header>
 
+      <div className="z-10 sm:sticky sm:top-0 -mx-1 flex flex-wrap items-center justify-between gap-3 bg-paper/95 px-1 py-2">
+        <p className="text-sm" role="status" data-testid="change-count">
+          {summary(changed, params.filter((r) => r.change).map((r) => r.label))}
+        </p>
+        <div className="flex flex-wrap items-center gap-3">
+          <label className="flex min-h-11 items-center gap-2 text-sm">
+            <input type="checkbox" className="size-5" checked={onlyChanges} onChange={(e) => setOnlyChanges(e.target.checked)} />
+            Only what changed
+          </label>
+          <UnitsToggle units={units} onChange={setUnits} />
+        </div>
+      </div>
+
+      <CompareTable caption="Parameters" rows={params} olderLabel={o} newerLabel={n} onlyChanges={onlyChanges} testId="compare-parameters" />
       <section aria-labelledby="model-h" className="grid gap-2">
         <h3 id="model-h" className="font-serif text-2xl font-semibold">The two forms</h3>
         {newer.validParams ? (
@@ -54,20 +75,6 @@ export function CompareView({ older, newer, initialUnits }: { older: CompareSide
         )}
       </section>
 
-      <div className="sticky top-0 z-10 -mx-1 flex flex-wrap items-center justify-between gap-3 bg-paper/95 px-1 py-2">
-        <p className="text-sm" role="status" data-testid="change-count">
-          {changed === 0 ? "No values changed." : changed === 1 ? "One value changed." : `${changed} values changed.`}
-        </p>
-        <div className="flex flex-wrap items-center gap-3">
-          <label className="flex min-h-11 items-center gap-2 text-sm">
-            <input type="checkbox" className="size-5" checked={onlyChanges} onChange={(e) => setOnlyChanges(e.target.checked)} />
-            Only what changed
-          </label>
-          <UnitsToggle units={units} onChange={setUnits} />
-        </div>
-      </div>
-
-      <CompareTable caption="Parameters" rows={params} olderLabel={o} newerLabel={n} onlyChanges={onlyChanges} testId="compare-parameters" />
       <CompareTable caption="Figures" rows={figures} olderLabel={o} newerLabel={n} onlyChanges={onlyChanges} testId="compare-figures" />
       <AttachmentChanges older={older} newer={newer} />
       <FontCautions />
