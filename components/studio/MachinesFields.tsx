@@ -29,11 +29,13 @@ export function MachinesFields({ machines, unit, errors, onChange }: Props) {
         return (
           <fieldset key={m.key} className="rounded-lg border border-line bg-card p-4" data-testid={`machine-${i}`}>
             <legend className="px-1 font-semibold">Machine {i + 1}</legend>
-            <Input id={`${p}.name`} label="Name" value={m.name} maxLength={120} onChange={(name) => set(i, { name })}
-              error={errors[`${p}.name`] ?? errors[`${p}.id`]} />
-            <Input id={`${p}.downfeedPerTurnMm`} label="Downfeed per full turn of the handwheel" inputMode="decimal" suffix={unit}
-              value={m.downfeed.text} onChange={(text) => set(i, { downfeed: typed(text) })}
-              error={errors[`${p}.downfeedPerTurnMm`]} hint={otherUnit(m, unit)} />
+            <div className="grid gap-x-4 sm:grid-cols-2">
+              <Input id={`${p}.name`} label="Name" value={m.name} maxLength={120} onChange={(name) => set(i, { name })}
+                error={errors[`${p}.name`] ?? errors[`${p}.id`]} />
+              <Input id={`${p}.downfeedPerTurnMm`} label="Downfeed per full turn of the handwheel" inputMode="decimal" suffix={unit}
+                value={m.downfeed.text} onChange={(text) => set(i, { downfeed: typed(text) })}
+                error={errors[`${p}.downfeedPerTurnMm`]} hint={otherUnit(m, unit)} />
+            </div>
             {machines.length > 1 && (
               <Button type="button" variant="quiet" onClick={() => onChange(machines.filter((_, j) => j !== i), true)}>
                 Remove {m.name.trim() || `machine ${i + 1}`}
