@@ -43,6 +43,11 @@ export function RevisionView({ initial, commissionId }: { initial: RevisionDto; 
         )}
       </header>
 
+      <section aria-labelledby="note-h" className="rounded-lg border border-line bg-card p-4">
+        <h3 id="note-h" className="mb-1 font-serif text-xl font-semibold">What changed and why</h3>
+        <p className="whitespace-pre-line" data-testid="revision-note">{rev.note}</p>
+      </section>
+
       <section aria-labelledby="files-h" className="grid gap-2">
         <h3 id="files-h" className="font-serif text-2xl font-semibold">Drawings and renders</h3>
         {rev.you.canComment && rev.attachments.length > 0 && <p className="text-sm text-ink-soft">Open a drawing and tap it to comment on that spot.</p>}
@@ -51,11 +56,6 @@ export function RevisionView({ initial, commissionId }: { initial: RevisionDto; 
             renderOverlay={(a) => <ImagePins attachmentId={a.id} threads={threads.data ?? []} onOpen={(id) => { setFocused(id); document.getElementById("comments")?.scrollIntoView({ behavior: "smooth" }); }} />}
             onImageClick={rev.you.canComment ? (a, x, y) => pick(tapTarget(a.id, x, y)) : undefined} />
         ) : <p className="text-ink-soft">No drawings attached to this revision.</p>}
-      </section>
-
-      <section aria-labelledby="note-h" className="rounded-lg border border-line bg-card p-4">
-        <h3 id="note-h" className="mb-1 font-serif text-xl font-semibold">What changed and why</h3>
-        <p className="whitespace-pre-line" data-testid="revision-note">{rev.note}</p>
       </section>
 
       {rev.state !== "draft" && (

@@ -1,4 +1,5 @@
 import type { TrailEvent } from "./event";
+import { STAGE_LABELS } from "../stages";
 
 const ROLE: Record<string, string> = {
   owner: "studio owner", designer: "designer", chair: "chair", member: "committee member", adviser: "adviser", system: "Placet",
@@ -11,6 +12,7 @@ const cap = (t: string) => t.charAt(0).toUpperCase() + t.slice(1);
 const when = (v: unknown) => (typeof v === "string" && /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}/.test(v) ? `${v.slice(0, 16).replace("T", " ")} UTC` : s(v));
 /** People's words, quoted and cut to a line (the full text stays in the payload). */
 const said = (v: unknown) => { const t = s(v).replace(/\s+/g, " ").trim(); return `“${t.length > 160 ? `${t.slice(0, 157)}…` : t}”`; };
+const stage = (v: unknown) => (STAGE_LABELS as Record<string, string>)[String(v)]?.toLowerCase() ?? String(v);
 const s = (v: unknown) => (typeof v === "string" ? v : v === undefined || v === null ? "" : JSON.stringify(v));
 
 /** One plain sentence for an event, from its action and payload (the actor's name is shown beside it). */
@@ -24,7 +26,7 @@ export function describeEvent(e: Pick<TrailEvent, "action" | "payload" | "subjec
       return `Changed ${s(p.email)} from ${ROLE[s(from?.role)] ?? s(from?.role)} to ${ROLE[s(to?.role)] ?? s(to?.role)}${to?.treasurer ? " (treasurer)" : ""}.`;
     }
     case "ballot rules changed": return "Changed the committee's ballot rules.";
-    case "stage changed": return `Moved the commission from ${s(p.from)} to ${s(p.to)}${p.reason ? `: ${s(p.reason)}` : "."}`;
+    case "stage changed": return `Moved the commission from ${stage(p.from)} to ${stage(p.to)}${p.reason ? `: ${s(p.reason)}` : "."}`;
     case "revision drafted": return `Started drafting Revision ${s(p.number)}.`;
     case "revision updated": return `Updated the draft of Revision ${s(p.number)}.`;
     case "attachment added": return `Attached "${s(p.name)}" to Revision ${s(p.number)}.`;

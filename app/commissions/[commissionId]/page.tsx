@@ -5,17 +5,25 @@ import { Card } from "@/components/ui/card";
 import { RulesSummary } from "@/components/rules-summary";
 import { NextSteps } from "@/components/next-steps";
 import { ROLE_LABELS } from "@/models/permissions/policy";
+import { listRevisions } from "@/lib/dal/revisions-read";
+import { getBallotState } from "@/lib/dal/ballots";
+import { CurrentRevision } from "@/components/current-revision";
 
 export const metadata: Metadata = { title: "Commission" };
 
 export default async function CommissionPage({ params }: { params: Promise<{ commissionId: string }> }) {
   const { commissionId } = await params;
-  const { commission: c } = await commissionForPage(commissionId, `/commissions/${commissionId}`);
+  const { viewer, commission: c } = await commissionForPage(commissionId, `/commissions/${commissionId}`);
+  const revisions = await listRevisions(viewer, c.id);
+  const current = revisions.find((r) => r.state === "circulated" || r.state === "decided") ?? null;
+  const draft = revisions.find((r) => r.state === "draft") ?? null;
+  const ballot = current ? await getBallotState(viewer, current.id) : null;
   const committee = c.people.filter((p) => p.side === "committee");
   return (
     <div className="grid gap-4 lg:grid-cols-3">
       <div className="grid gap-4 lg:col-span-2">
         <NextSteps commission={c} />
+        <CurrentRevision commissionId={c.id} revision={current} ballot={ballot} draft={draft} />
         <Card title="How this committee decides" action={c.rulesEditable ? <Link href={`/commissions/${c.id}/rules`} className="min-h-11 py-2">Edit the rules</Link> : undefined}>
           <RulesSummary rules={c.rules} />
           {!c.rulesEditable && c.you.can["rules.edit"] && <p className="mt-2 text-sm text-ink-soft">The rules are fixed now that a ballot has been held.</p>}
