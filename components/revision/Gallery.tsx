@@ -14,6 +14,8 @@ export interface GalleryProps {
   renderOverlay?: (attachment: AttachmentDto) => ReactNode;
   /** A tap on a picture in the viewer, in percent of the picture's width and height. */
   onImageClick?: (attachment: AttachmentDto, xPercent: number, yPercent: number) => void;
+  /** close the full-screen viewer after a tap has been reported (so a comment box below can be reached) */
+  closeOnImageClick?: boolean;
 }
 
 const ordered = (list: AttachmentDto[]) => [...list].sort((a, b) => a.position - b.position || a.id - b.id);
@@ -21,7 +23,7 @@ const size = (n: number) => (n >= 1024 * 1024 ? `${(n / (1024 * 1024)).toFixed(1
 const overlayBox = "pointer-events-none absolute inset-0 [&_a]:pointer-events-auto [&_button]:pointer-events-auto";
 
 /** A revision's files: the lead picture large, then the rest; pictures open in a zoomable viewer. */
-export function Gallery({ attachments, editable = false, onChanged, renderOverlay, onImageClick }: GalleryProps) {
+export function Gallery({ attachments, editable = false, onChanged, renderOverlay, onImageClick, closeOnImageClick = false }: GalleryProps) {
   const all = ordered(attachments);
   const images = all.filter((a) => a.kind !== "pdf");
   const lead = images[0];
@@ -78,7 +80,7 @@ export function Gallery({ attachments, editable = false, onChanged, renderOverla
       )}
       {open !== null && images[open] && (
         <ImageViewer images={images} index={open} onIndex={setOpen} onClose={close} renderOverlay={renderOverlay}
-          onImageClick={onImageClick ? (a, x, y) => { onImageClick(a, x, y); close(); } : undefined} />
+          onImageClick={onImageClick ? (a, x, y) => { onImageClick(a, x, y); if (closeOnImageClick) close(); } : undefined} />
       )}
     </div>
   );

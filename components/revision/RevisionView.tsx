@@ -52,7 +52,7 @@ export function RevisionView({ initial, commissionId }: { initial: RevisionDto; 
         <h3 id="files-h" className="font-serif text-2xl font-semibold">Drawings and renders</h3>
         {rev.you.canComment && rev.attachments.length > 0 && <p className="text-sm text-ink-soft">Open a drawing and tap it to comment on that spot.</p>}
         {rev.attachments.length ? (
-          <Gallery attachments={rev.attachments}
+          <Gallery attachments={rev.attachments} closeOnImageClick
             renderOverlay={(a) => <ImagePins attachmentId={a.id} threads={threads.data ?? []} onOpen={(id) => { setFocused(id); document.getElementById("comments")?.scrollIntoView({ behavior: "smooth" }); }} />}
             onImageClick={rev.you.canComment ? (a, x, y) => pick(tapTarget(a.id, x, y)) : undefined} />
         ) : <p className="text-ink-soft">No drawings attached to this revision.</p>}
