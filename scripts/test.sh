@@ -57,7 +57,7 @@ if [ "$build_rc" = 0 ]; then
   server_b_pid=$!
   for _ in $(seq 1 100); do curl -fs "http://127.0.0.1:$E2E_PORT/api/health" >/dev/null 2>&1 && curl -fs "http://127.0.0.1:$E2E_PORT_B/api/health" >/dev/null 2>&1 && break; sleep 0.3; done
   log "end-to-end tests (Playwright, chromium, desktop and phone)"
-  E2E_BASE_URL="http://localhost:$E2E_PORT" E2E_BASE_URL_B="http://localhost:$E2E_PORT_B" E2E_MAIL_API="http://127.0.0.1:$E2E_WEB" npx playwright test
+  E2E_BASE_URL="http://localhost:$E2E_PORT" E2E_BASE_URL_B="http://localhost:$E2E_PORT_B" E2E_MAIL_API="http://127.0.0.1:$E2E_WEB" npx playwright test ${PLAYWRIGHT_ARGS:-}
   e2e_rc=$?
 fi
 

@@ -1,0 +1,32 @@
+import { expect, test } from "@playwright/test";
+import { DEMO_TITLE, makePerson, signInAs, sql, unique } from "./helpers";
+
+test("a member taps the 3D model to pin a comment on that spot, and the pin shows on the model", async ({ page }, info) => {
+  const [rev] = await sql<{ commission_id: number; number: number }[]>(
+    "SELECT r.commission_id, r.number FROM revisions r JOIN commissions c ON c.id = r.commission_id WHERE c.title = ? AND r.state = 'circulated' ORDER BY r.number DESC LIMIT 1", [DEMO_TITLE]);
+  await signInAs(page, await makePerson("member"));
+  await page.goto(`/commissions/${rev.commission_id}/revisions/${rev.number}`);
+  const canvas = page.getByTestId("font-canvas");
+  await expect(canvas).toBeVisible({ timeout: 20_000 });
+  await canvas.scrollIntoViewIfNeeded();
+  await page.waitForTimeout(1500); // let the scene settle before picking
+  const box = (await canvas.boundingBox())!;
+  // Try a few spots down the middle of the picture until one lands on the glass or the pedestal.
+  const composer = page.getByTestId("composer-target");
+  for (const f of [0.16, 0.2, 0.12, 0.4, 0.6]) {
+    await page.mouse.click(box.x + box.width / 2, box.y + box.height * f);
+    if (/on the (bowl|foot|pedestal)/.test((await composer.textContent()) ?? "")) break;
+  }
+  await expect(composer).toContainText(/on the (bowl|foot|pedestal), \d+ mm up/);
+  const words = `Is this spot where the engraving goes? ${unique("m")}`;
+  await page.getByLabel("Your comment").fill(words);
+  await page.getByRole("button", { name: "Post comment" }).click();
+  const thread = page.locator("article, li, div").filter({ hasText: words }).last();
+  await expect(thread).toBeVisible();
+  await page.screenshot({ path: `.data/screenshots/model-pin-${info.project.name}.png`, fullPage: false });
+  const [row] = await sql<{ target: string }[]>("SELECT target FROM comments WHERE body = ?", [words]);
+  const target = JSON.parse(row.target);
+  expect(target.kind).toBe("model");
+  expect(["bowl", "foot", "pedestal"]).toContain(target.part);
+  expect(target.point).toHaveLength(3);
+});
