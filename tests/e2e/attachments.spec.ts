@@ -1,6 +1,6 @@
 import { expect, request as playwrightRequest, test, type Page } from "@playwright/test";
 import sharp from "sharp";
-import { makePerson, signInAs, sql, unique } from "./helpers";
+import { makePerson, signInAs, sql, unique, newCommissionViaForm } from "./helpers";
 
 const OTHER_TITLE = "Font and cover for the new chapel";
 
@@ -11,14 +11,7 @@ const drawing = async (w = 900, h = 600) =>
 
 /** A commission of the designer's own with Revision 1 started as a draft; returns the edit page's ids. */
 async function ownDraft(page: Page): Promise<{ title: string; commissionId: number; revisionId: number }> {
-  const title = unique("Font for the baptistry");
-  await page.goto("/commissions/new");
-  await page.getByLabel("Title").fill(title);
-  await page.getByLabel("Commissioning body").fill("Test parish — Fabric Committee");
-  await page.getByLabel("Site").fill("Test church, the north aisle");
-  await page.getByRole("button", { name: "Create the commission" }).click();
-  await expect(page).toHaveURL(/\/commissions\/\d+$/);
-  const commissionId = Number(/\/commissions\/(\d+)/.exec(page.url())![1]);
+  const { title, commissionId } = await newCommissionViaForm(page, "Font for the baptistry", "Test parish — Fabric Committee", "Test church, the north aisle");
   await page.goto(`/commissions/${commissionId}/revisions/new`);
   await page.getByRole("button", { name: "Start the draft" }).click();
   await expect(page).toHaveURL(new RegExp(`/commissions/${commissionId}/revisions/1/edit$`));

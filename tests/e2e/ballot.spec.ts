@@ -1,20 +1,13 @@
 import { devices, expect, test, type Browser, type Page } from "@playwright/test";
 import { verifyRecord } from "../../models/trail/node-hash";
-import { linkIn, makePerson, signInAs, sql, unique, waitForMail } from "./helpers";
+import { linkIn, makePerson, signInAs, sql, unique, waitForMail, newCommissionViaForm } from "./helpers";
 
 const { defaultBrowserType: _ignored, ...PHONE } = devices["Pixel 7"];
 void _ignored;
 
 /** A commission of the test's own (so the desktop and phone runs never supersede each other's revision), circulated. */
 async function ownCirculatedCommission(page: Page): Promise<{ title: string; commissionId: number }> {
-  const title = unique("Font for the south porch");
-  await page.goto("/commissions/new");
-  await page.getByLabel("Title").fill(title);
-  await page.getByLabel("Commissioning body").fill("St Tessa's — Building Committee");
-  await page.getByLabel("Site").fill("St Tessa's, Polgarrow: the south porch");
-  await page.getByRole("button", { name: "Create the commission" }).click();
-  await expect(page).toHaveURL(/\/commissions\/\d+$/);
-  const commissionId = Number(/\/commissions\/(\d+)/.exec(page.url())![1]);
+  const { title, commissionId } = await newCommissionViaForm(page, "Font for the south porch", "St Tessa's — Building Committee", "St Tessa's, Polgarrow: the south porch");
 
   await page.goto(`/commissions/${commissionId}/rules`);
   await page.getByLabel("Authority for electronic ballots").fill("Standing order 4: the committee may vote by electronic ballot between meetings");

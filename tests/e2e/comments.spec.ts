@@ -1,6 +1,6 @@
 import { expect, request as playwrightRequest, test, type Page } from "@playwright/test";
 import sharp from "sharp";
-import { makePerson, signInAs, sql, unique, waitForMail } from "./helpers";
+import { makePerson, signInAs, sql, unique, waitForMail, newCommissionViaForm } from "./helpers";
 
 const CAPTION = "West elevation";
 const drawing = (w = 900, h = 600) =>
@@ -10,14 +10,7 @@ const drawing = (w = 900, h = 600) =>
 
 /** A commission of the test's own (so the desktop and phone runs never share one), with Revision 1 circulated with a drawing. */
 async function ownCirculatedRevision(page: Page) {
-  const title = unique("Font for the lady chapel");
-  await page.goto("/commissions/new");
-  await page.getByLabel("Title").fill(title);
-  await page.getByLabel("Commissioning body").fill("St Morwen's — Fabric Committee");
-  await page.getByLabel("Site").fill("St Morwen's, Trevellan: the lady chapel");
-  await page.getByRole("button", { name: "Create the commission" }).click();
-  await expect(page).toHaveURL(/\/commissions\/\d+$/);
-  const commissionId = Number(/\/commissions\/(\d+)/.exec(page.url())![1]);
+  const { title, commissionId } = await newCommissionViaForm(page, "Font for the lady chapel", "St Morwen's — Fabric Committee", "St Morwen's, Trevellan: the lady chapel");
   await page.goto(`/commissions/${commissionId}/revisions/new`);
   await page.getByLabel("What changed and why (you can finish this later)").fill("First proposal: a cast bowl on a ground foot.");
   await page.getByRole("button", { name: "Start the draft" }).click();

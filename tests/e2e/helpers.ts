@@ -81,3 +81,15 @@ export async function makePerson(role: "owner" | "designer" | "chair" | "member"
   }
   return email;
 }
+
+/** Creates a commission of the test's own through the studio's form; returns its title and id. */
+export async function newCommissionViaForm(page: Page, prefix: string, clientBody: string, site: string): Promise<{ title: string; commissionId: number }> {
+  const title = unique(prefix);
+  await page.goto("/commissions/new");
+  await page.getByLabel("Title").fill(title);
+  await page.getByLabel("Commissioning body").fill(clientBody);
+  await page.getByLabel("Site").fill(site);
+  await page.getByRole("button", { name: "Create the commission" }).click();
+  await expect(page).toHaveURL(/\/commissions\/\d+$/);
+  return { title, commissionId: Number(/\/commissions\/(\d+)/.exec(page.url())![1]) };
+}

@@ -1,6 +1,6 @@
 import { expect, test, type Page } from "@playwright/test";
 import sharp from "sharp";
-import { linkIn, makePerson, signInAs, unique, waitForMail } from "./helpers";
+import { linkIn, makePerson, newCommissionViaForm, signInAs, waitForMail } from "./helpers";
 
 const drawing = () =>
   sharp({ create: { width: 800, height: 500, channels: 3, background: "#e7efe9" } })
@@ -21,15 +21,8 @@ async function circulateDraft(page: Page, n: number) {
 
 test("the designer drafts, uploads with progress and circulates; a member opens the mail link and reads it; compare shows what changed", async ({ page, browser, baseURL }) => {
   test.setTimeout(150_000);
-  const title = unique("Font for the chapel of rest");
   await signInAs(page, await makePerson("designer"));
-  await page.goto("/commissions/new");
-  await page.getByLabel("Title").fill(title);
-  await page.getByLabel("Commissioning body").fill("Harrowden Parish — Fabric Committee");
-  await page.getByLabel("Site").fill("Harrowden church, the chapel of rest");
-  await page.getByRole("button", { name: "Create the commission" }).click();
-  await expect(page).toHaveURL(/\/commissions\/\d+$/);
-  const commissionId = Number(/\/commissions\/(\d+)/.exec(page.url())![1]);
+  const { title, commissionId } = await newCommissionViaForm(page, "Font for the chapel of rest", "Harrowden Parish — Fabric Committee", "Harrowden church, the chapel of rest");
   const member = await makePerson("member", { commissionTitle: title });
 
   // Revision 1: the model, a note, a drawing (with its progress bar), then circulate.
