@@ -1,6 +1,7 @@
 import "server-only";
 import { cache } from "react";
 import { redirect } from "next/navigation";
+import { cookies } from "next/headers";
 import { auth } from "./auth";
 import { loadViewer, type Viewer } from "./dal/viewer";
 import { UnauthenticatedError } from "./errors";
@@ -10,7 +11,9 @@ export const getViewer = cache(async (): Promise<Viewer | null> => {
   const session = await auth();
   const id = session?.user?.id;
   if (!id) return null;
-  return loadViewer(id);
+  const jar = await cookies();
+  const token = jar.get("__Secure-authjs.session-token")?.value ?? jar.get("authjs.session-token")?.value;
+  return loadViewer(id, token);
 });
 
 /** For route handlers and actions: the viewer, or a 401. */

@@ -12,7 +12,7 @@ export SMTP_HOST="${SMTP_HOST:-127.0.0.1}"
 export SMTP_PORT="${SMTP_PORT:-1025}"
 export MAIL_WEB_PORT="${MAIL_WEB_PORT:-1080}"
 export MAIL_FROM="${MAIL_FROM:-Placet <noreply@placet.localhost>}"
-export AUTH_URL="${AUTH_URL:-http://localhost:3000}"
+export AUTH_URL="${AUTH_URL:-http://localhost:${PORT:-3000}}"
 export AUTH_TRUST_HOST=true
 export STORAGE_DIR="${STORAGE_DIR:-$DATA_DIR/files}"
 if [ -z "${AUTH_SECRET:-}" ]; then

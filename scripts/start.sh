@@ -34,7 +34,7 @@ fi
 
 setsid npx next start -H 127.0.0.1 -p "$PORT" &
 pids+=($!)
-for _ in $(seq 1 100); do curl -fs "http://127.0.0.1:$PORT/api/health" >/dev/null 2>&1 && break; sleep 0.3; done
+node scripts/wait-for.mjs 60 "http://127.0.0.1:$PORT/api/health" || exit 1
 
 cat <<MSG
 

@@ -55,7 +55,7 @@ if [ "$build_rc" = 0 ]; then
   E2E_PORT_B=$((E2E_PORT + 1))
   setsid npx next start -H 127.0.0.1 -p "$E2E_PORT_B" >"$DATA_DIR/e2e-server-b.log" 2>&1 &
   server_b_pid=$!
-  for _ in $(seq 1 100); do curl -fs "http://127.0.0.1:$E2E_PORT/api/health" >/dev/null 2>&1 && curl -fs "http://127.0.0.1:$E2E_PORT_B/api/health" >/dev/null 2>&1 && break; sleep 0.3; done
+  node scripts/wait-for.mjs 90 "http://127.0.0.1:$E2E_PORT/api/health" "http://127.0.0.1:$E2E_PORT_B/api/health" || tail -20 "$DATA_DIR/e2e-server.log"
   log "end-to-end tests (Playwright, chromium, desktop and phone)"
   E2E_BASE_URL="http://localhost:$E2E_PORT" E2E_BASE_URL_B="http://localhost:$E2E_PORT_B" E2E_MAIL_API="http://127.0.0.1:$E2E_WEB" npx playwright test ${PLAYWRIGHT_ARGS:-}
   e2e_rc=$?

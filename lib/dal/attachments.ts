@@ -115,7 +115,7 @@ export async function addAttachment(viewer: Viewer, revisionId: number, input: {
       await appendTrail(tx, {
         commissionId: fresh.commissionId, actorId: viewer.id, actorRole: access.actingRole, action: "attachment added",
         subjectType: "attachment", subjectId: res.id,
-        payload: { number: fresh.number, name: result.safeName, sha256: result.sha256, kind: result.kind },
+        payload: { number: fresh.number, sha256: result.sha256, kind: result.kind }, // no name: drafts are the studio's alone
       });
       return res.id;
     });
@@ -141,7 +141,7 @@ export async function removeAttachment(viewer: Viewer, attachmentId: number): Pr
     await tx.update(revisions).set({ updatedAt: new Date() }).where(eq(revisions.id, fresh.id));
     await appendTrail(tx, {
       commissionId: row.commissionId, actorId: viewer.id, actorRole: access.actingRole, action: "attachment removed",
-      subjectType: "attachment", subjectId: row.id, payload: { number: fresh.number, name: row.name, sha256: row.sha256, kind: row.kind },
+      subjectType: "attachment", subjectId: row.id, payload: { number: fresh.number, sha256: row.sha256, kind: row.kind },
     });
   });
   await deleteQuietly([row.storageKey, row.thumbKey]);
@@ -165,7 +165,7 @@ export async function updateCaption(viewer: Viewer, attachmentId: number, rawCap
     await appendTrail(tx, {
       commissionId: row.commissionId, actorId: viewer.id, actorRole: access.actingRole, action: "revision updated",
       subjectType: "revision", subjectId: fresh.id,
-      payload: { number: fresh.number, caption: { attachmentId: row.id, name: row.name, from: current.caption, to: caption } },
+      payload: { number: fresh.number, captionChanged: { attachmentId: row.id } },
     });
   });
   const [updated] = await db.select().from(attachments).where(eq(attachments.id, row.id));

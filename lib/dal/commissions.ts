@@ -172,7 +172,8 @@ async function updateRulesTx(viewer: Viewer, access: Awaited<ReturnType<typeof a
   return db.transaction(async (tx) => {
     await lockCommission(tx, commissionId);
     if (await rulesLocked(commissionId)) throw new ConflictError("The ballot rules are fixed once a ballot has been opened.");
-    const before = rulesOf(access.commission);
+    const [fresh] = await tx.select().from(commissions).where(eq(commissions.id, commissionId));
+    const before = rulesOf(fresh);
     await tx.update(commissions).set({
       quorum: String(next.quorum), threshold: next.threshold, chairVotes: next.chairVotes,
       electronicAuthority: next.electronicAuthority, updatedAt: new Date(),

@@ -36,7 +36,7 @@ const basisOf = (number: number, b: BallotRow | undefined) => ({
 
 /** How long ago the viewer signed in, against the window for signing a decision. */
 async function freshness(viewer: Viewer) {
-  const started = await sessionStartedAt(viewer.id);
+  const started = await sessionStartedAt(viewer);
   const needed = !started || Date.now() - started.getTime() > env.freshSignInSeconds * 1000;
   return { needed, signedInAt: started?.toISOString() ?? null };
 }

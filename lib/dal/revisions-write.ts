@@ -6,7 +6,9 @@ import { defaultFontParameters, evaluateFont } from "@/models/font";
 import { editRefusal, NOTE_MAX, revisionContent } from "@/models/revision";
 import { revisionContentHash } from "@/models/revision/hash-node";
 import { env } from "../env";
-import { ConflictError, ValidationError } from "../errors";
+import { ConflictError, ForbiddenError, ValidationError } from "../errors";
+import { can } from "@/models/permissions/policy";
+import { closeBallotTx } from "./ballot-core";
 import { enqueueMail } from "../outbox";
 import { appendTrail, lockCommission, type Tx } from "../trail";
 import { authorize } from "./access";
@@ -51,29 +53,34 @@ export async function createDraft(viewer: Viewer, commissionId: number, input: {
 export async function updateDraft(viewer: Viewer, commissionId: number, number: number, input: { params?: unknown; note?: unknown }) {
   const db = getDb();
   const { access, revision } = await loadRevision(db, viewer, commissionId, number);
-  if (!access.actor.studioRole) throw new ConflictError("Only the studio edits revisions.");
+  if (!can(access.actor, "revision.draft")) throw new ForbiddenError("Only the studio edits revisions.");
   const frozen = editRefusal(revision.state, revision.number);
   if (frozen) throw new ConflictError(frozen);
-  const note = input.note === undefined ? revision.note : checkNote(input.note);
-  let params = revision.params;
-  if (input.params !== undefined) {
-    if (!input.params || typeof input.params !== "object" || Array.isArray(input.params)) throw new ValidationError({ params: "The model's parameters must be an object." });
-    const ev = evaluateFont({ ...revision.params, ...(input.params as Record<string, unknown>) });
-    if (!ev.ok) throw new ValidationError(fontErrors(ev.fieldErrors, ev.formErrors));
-    params = ev.params as unknown as Record<string, unknown>;
+  const noteInput = input.note === undefined ? undefined : checkNote(input.note);
+  if (input.params !== undefined && (!input.params || typeof input.params !== "object" || Array.isArray(input.params))) {
+    throw new ValidationError({ params: "The model's parameters must be an object." });
   }
   return db.transaction(async (tx) => {
     await lockCommission(tx, commissionId);
     const [fresh] = await tx.select().from(revisions).where(eq(revisions.id, revision.id));
     const refusal = editRefusal(fresh.state, fresh.number);
     if (refusal) throw new ConflictError(refusal);
+    const note = noteInput ?? fresh.note;
+    let params = fresh.params;
+    if (input.params !== undefined) {
+      const ev = evaluateFont({ ...fresh.params, ...(input.params as Record<string, unknown>) });
+      if (!ev.ok) throw new ValidationError(fontErrors(ev.fieldErrors, ev.formErrors));
+      params = ev.params as unknown as Record<string, unknown>;
+    }
     const changed = Object.keys(params).filter((k) => JSON.stringify(params[k]) !== JSON.stringify(fresh.params[k]));
     if (!changed.length && note === fresh.note) return { changed: [] as string[] };
     await tx.update(revisions).set({ params, note, updatedAt: new Date() }).where(eq(revisions.id, revision.id));
+    // A draft is the studio's alone, and the trail is read by the whole commission: record which values
+    // changed, not what they became (the frozen content is hashed into the trail at circulation).
     await appendTrail(tx, {
       commissionId, actorId: viewer.id, actorRole: access.actingRole, action: "revision updated",
       subjectType: "revision", subjectId: revision.id,
-      payload: { number, changed: Object.fromEntries(changed.map((k) => [k, { from: fresh.params[k], to: params[k] }])), noteChanged: note !== fresh.note },
+      payload: { number, changed, noteChanged: note !== fresh.note },
     });
     return { changed };
   });
@@ -87,7 +94,7 @@ export async function updateDraft(viewer: Viewer, commissionId: number, number: 
 export async function circulate(viewer: Viewer, commissionId: number, number: number): Promise<{ contentHash: string }> {
   const db = getDb();
   const { access, revision } = await loadRevision(db, viewer, commissionId, number);
-  if (!access.actor.studioRole) throw new ConflictError("Only the studio circulates revisions.");
+  if (!can(access.actor, "revision.circulate")) throw new ForbiddenError("Only the studio circulates revisions.");
   return db.transaction(async (tx) => {
     await lockCommission(tx, commissionId);
     const [fresh] = await tx.select().from(revisions).where(eq(revisions.id, revision.id));
@@ -120,6 +127,11 @@ async function supersedePrevious(tx: Tx, viewer: Viewer, role: string, commissio
   for (const o of older) {
     const open = await tx.select().from(ballots).where(and(eq(ballots.revisionId, o.id), eq(ballots.status, "open")));
     for (const b of open) {
+      if (b.closesAt && b.closesAt <= now) {
+        // Its time had come before this circulation: it closes with its result, it is not withdrawn.
+        await closeBallotTx(tx, b, o.number, { id: null, role: "system" }, "closing time");
+        continue;
+      }
       await tx.update(ballots).set({ status: "withdrawn", closedAt: now }).where(eq(ballots.id, b.id));
       await appendTrail(tx, {
         commissionId, actorId: viewer.id, actorRole: role, action: "ballot withdrawn", subjectType: "ballot", subjectId: b.id,

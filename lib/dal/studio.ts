@@ -43,8 +43,11 @@ export async function updateStudioSettings(viewer: Viewer, input: unknown): Prom
     throw new ValidationError(fields);
   }
   const db = getDb();
-  const [before] = await db.select({ settings: studios.settings }).from(studios).where(eq(studios.id, mine.studioId));
-  await db.update(studios).set({ settings: r.data }).where(eq(studios.id, mine.studioId));
-  await logSecurity({ userId: viewer.id, email: viewer.email, action: "studio settings changed", detail: { studioId: mine.studioId, before: before?.settings, after: r.data } });
+  const before = await db.transaction(async (tx) => {
+    const [row] = await tx.select({ settings: studios.settings }).from(studios).where(eq(studios.id, mine.studioId)).for("update");
+    await tx.update(studios).set({ settings: r.data }).where(eq(studios.id, mine.studioId));
+    return row?.settings;
+  });
+  await logSecurity({ userId: viewer.id, email: viewer.email, action: "studio settings changed", detail: { studioId: mine.studioId, before, after: r.data } });
   return r.data;
 }

@@ -1,9 +1,9 @@
 import "server-only";
-import { eq } from "drizzle-orm";
+import { and, eq } from "drizzle-orm";
 import { getDb, withRetry } from "@/db/client";
 import { sessions, studioMembers, studios, users } from "@/db/schema";
 import type { StudioRole } from "@/models/permissions/policy";
-import { UnauthenticatedError } from "../errors";
+import { ForbiddenError } from "../errors";
 
 /** The person asking, with their studio roles read from the database on every request. */
 export interface Viewer {
@@ -13,9 +13,11 @@ export interface Viewer {
   units: "mm" | "in";
   notices: "immediate" | "digest";
   studios: { studioId: number; studioName: string; role: StudioRole }[];
+  /** The session this request came with (from its cookie), when known. */
+  sessionToken?: string;
 }
 
-export async function loadViewer(userId: string): Promise<Viewer | null> {
+export async function loadViewer(userId: string, sessionToken?: string): Promise<Viewer | null> {
   return withRetry(async () => {
     const db = getDb();
     const [u] = await db.select().from(users).where(eq(users.id, userId)).limit(1);
@@ -25,20 +27,26 @@ export async function loadViewer(userId: string): Promise<Viewer | null> {
       .from(studioMembers)
       .innerJoin(studios, eq(studios.id, studioMembers.studioId))
       .where(eq(studioMembers.userId, userId));
-    return { id: u.id, email: u.email, name: u.name ?? u.email, units: u.units, notices: u.notices, studios: rows };
+    return { id: u.id, email: u.email, name: u.name ?? u.email, units: u.units, notices: u.notices, studios: rows, sessionToken };
   });
 }
 
-/** When the current session began (for the chair's fresh sign-in before signing a decision). */
-export async function sessionStartedAt(userId: string): Promise<Date | null> {
+/**
+ * When the viewer's current session began (for the chair's fresh sign-in before signing a decision):
+ * the session of this request when its token is known, so an old session elsewhere never counts as fresh.
+ */
+export async function sessionStartedAt(viewer: Pick<Viewer, "id" | "sessionToken">): Promise<Date | null> {
   const db = getDb();
-  const rows = await db.select({ createdAt: sessions.createdAt }).from(sessions).where(eq(sessions.userId, userId));
+  const where = viewer.sessionToken
+    ? and(eq(sessions.userId, viewer.id), eq(sessions.sessionToken, viewer.sessionToken))
+    : eq(sessions.userId, viewer.id);
+  const rows = await db.select({ createdAt: sessions.createdAt }).from(sessions).where(where);
   if (!rows.length) return null;
   return rows.reduce((a, b) => (a.createdAt > b.createdAt ? a : b)).createdAt;
 }
 
 export function requireStudio(viewer: Viewer, studioId?: number) {
   const s = studioId === undefined ? viewer.studios[0] : viewer.studios.find((x) => x.studioId === studioId);
-  if (!s) throw new UnauthenticatedError("This is for studio staff.");
+  if (!s) throw new ForbiddenError("This is for studio staff.");
   return s;
 }

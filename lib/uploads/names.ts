@@ -13,7 +13,7 @@ import { MAX_NAME_LENGTH } from "./limits";
  *   headers and logs;
  * - refused: a blank name;
  * - cleaned: invisible zero-width characters are dropped, characters that are unsafe in
- *   download headers or on Windows (`" * : < > ? |`) become `_`, runs of spaces collapse,
+ *   download headers or on some desktop file systems (`" * : < > ? |`) become `_`, runs of spaces collapse,
  *   leading dots and trailing dots/spaces go, and names over 200 characters are shortened in the
  *   middle keeping the extension — long names are common from cameras and drawing exports and
  *   harmless once shortened.

@@ -59,9 +59,9 @@ export async function detectKind(bytes: Uint8Array, shown: string): Promise<Dete
   }
   if (PROGRAMS.has(ext)) return refuse(`${shown} is a program, not a drawing or photo, and cannot be uploaded.`);
   if (DOCUMENTS.has(ext)) return refuse(`${shown} is an office document. Save it as a PDF and upload that.`);
-  if (ext === "ai") return refuse(`${shown} is an Illustrator file. Save a copy as a plain PDF and upload that.`);
+  if (ext === "ai") return refuse(`${shown} is a vector-drawing file (.ai). Save a copy as a plain PDF and upload that.`);
   if (ext === "heic" || ext === "heif") {
-    return refuse(`${shown} is a HEIC photo (the usual iPhone format). Export it as JPEG and try again.`);
+    return refuse(`${shown} is a HEIC photo (many phones save these). Export it as JPEG and try again.`);
   }
   if (found.mime.startsWith("image/")) {
     return refuse(`${shown} is a ${ext.toUpperCase()} image. Only PNG, JPEG and WebP images are accepted; save it as one of those.`);

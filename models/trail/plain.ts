@@ -28,9 +28,9 @@ export function describeEvent(e: Pick<TrailEvent, "action" | "payload" | "subjec
     case "ballot rules changed": return "Changed the committee's ballot rules.";
     case "stage changed": return `Moved the commission from ${stage(p.from)} to ${stage(p.to)}${p.reason ? `: ${s(p.reason)}` : "."}`;
     case "revision drafted": return `Started drafting Revision ${s(p.number)}.`;
-    case "revision updated": return `Updated the draft of Revision ${s(p.number)}.`;
-    case "attachment added": return `Attached "${s(p.name)}" to Revision ${s(p.number)}.`;
-    case "attachment removed": return `Removed "${s(p.name)}" from Revision ${s(p.number)}.`;
+    case "revision updated": return `Worked on the draft of Revision ${s(p.number)}${Array.isArray(p.changed) && p.changed.length ? ` (${p.changed.length} value${p.changed.length === 1 ? "" : "s"} changed)` : ""}.`;
+    case "attachment added": return `Attached a file (${s(p.kind).toUpperCase()}) to the draft of Revision ${s(p.number)}.`;
+    case "attachment removed": return `Removed a file from the draft of Revision ${s(p.number)}.`;
     case "revision circulated": return `Circulated Revision ${s(p.number)} to the committee (content hash ${s(p.contentHash).slice(0, 12)}…).`;
     case "revision superseded": return `Revision ${s(p.number)} was superseded by Revision ${s(p.by)}.`;
     case "comment posted": {

@@ -110,3 +110,23 @@ describe("circulation mail goes through the outbox", () => {
     expect(to).toEqual(["colin@stwenna.test", "david@stwenna.test", "margaret@stwenna.test", "priya@stwenna.test", "ruth@stwenna.test"]);
   }, 60_000);
 });
+
+describe("the trail keeps a draft's contents from the committee", () => {
+  it("a member's record holds no draft note, values, file names or captions", async () => {
+    const v = await designer();
+    const { createCommission } = await import("@/lib/dal/commissions");
+    const { invitePerson } = await import("@/lib/dal/people");
+    const { addAttachment } = await import("@/lib/dal/attachments");
+    const { exportRecord } = await import("@/lib/dal/trail");
+    const sharp = (await import("sharp")).default;
+    const { id } = await createCommission(v, { title: "Secret draft font", clientBody: "Test body", site: "Test site" });
+    await invitePerson(v, id, { email: "david@stwenna.test", name: "David Osei", role: "member" });
+    const d = await createDraft(v, id, { note: "UNSEEN-NOTE" });
+    await updateDraft(v, id, d.number, { params: { depth: 171 }, note: "UNSEEN-NOTE-2" });
+    const png = await sharp({ create: { width: 40, height: 30, channels: 3, background: "#abcdef" } }).png().toBuffer();
+    await addAttachment(v, d.id, { name: "UNSEEN-FILE.png", bytes: png, caption: "UNSEEN-CAPTION" });
+    const record = JSON.stringify(await exportRecord(await viewer("david@stwenna.test"), id));
+    for (const secret of ["UNSEEN", "171"]) expect(record).not.toContain(secret);
+    expect(record).toContain("revision updated");
+  });
+});
