@@ -26,6 +26,7 @@ export default async function TrailPage({ params }: { params: Promise<{ commissi
         {trail.finalHash && <p className="mb-3">Final hash now: <CopyHash hash={trail.finalHash} label="final hash" /></p>}
         <div className="flex flex-wrap gap-3">
           <a href={`/api/commissions/${c.id}/record.json`} className={buttonClass("secondary")} download>Download the record (JSON)</a>
+          <a href={`/api/commissions/${c.id}/record.pdf`} className={buttonClass("secondary")} download>Download the decision record (PDF)</a>
           <Link href="/verify" className={buttonClass("quiet")}>Check a record</Link>
         </div>
       </Card>
