@@ -2,7 +2,7 @@ import "server-only";
 import { notFound } from "next/navigation";
 import { viewerOrSignIn } from "@/lib/session";
 import { getStudio } from "@/lib/dal/studio";
-import { UnauthenticatedError } from "@/lib/errors";
+import { ForbiddenError } from "@/lib/errors";
 
 /** The viewer's studio for a page; someone on no studio's staff gets "not found". */
 export async function studioForPage(path: string) {
@@ -10,7 +10,7 @@ export async function studioForPage(path: string) {
   try {
     return { viewer, studio: await getStudio(viewer) };
   } catch (err) {
-    if (err instanceof UnauthenticatedError) notFound();
+    if (err instanceof ForbiddenError) notFound();
     throw err;
   }
 }
