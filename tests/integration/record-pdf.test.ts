@@ -1,0 +1,79 @@
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { PDFDocument } from "pdf-lib";
+import { recordMeetingVote } from "@/lib/dal/ballots";
+import { recordDecision } from "@/lib/dal/decisions";
+import { decisionRecordFor } from "@/lib/dal/record";
+import { listRevisions } from "@/lib/dal/revisions-read";
+import { createDraft } from "@/lib/dal/revisions-write";
+import { exportRecord } from "@/lib/dal/trail";
+import { NotFoundError } from "@/lib/errors";
+import { renderDecisionRecordPdf } from "@/lib/record-pdf";
+import { verifyRecord } from "@/models/trail/node-hash";
+import { pdfPageTexts } from "../pdf-text";
+import { PEOPLE, signedIn } from "./ballot-helpers";
+import { closeDb, freshDemo, viewer } from "./db";
+
+let ids: Awaited<ReturnType<typeof freshDemo>>;
+beforeAll(async () => {
+  ids = await freshDemo({ revisions: true });
+  const chair = await viewer(PEOPLE.chair);
+  await signedIn(PEOPLE.chair, 1);
+  const rev2 = (await listRevisions(chair, ids.commissionId)).find((r) => r.number === 2)!;
+  await recordMeetingVote(chair, rev2.id, { meetingDate: new Date().toISOString().slice(0, 10), counts: { inFavour: 3, against: 0, abstain: 0 } });
+  await recordDecision(chair, rev2.id, {
+    outcome: "approved-as-noted",
+    conditions: "Lower the rim so that it stands ≤ 850 mm above the floor\nShow the fixing of the foot to the pedestal on the drawing",
+    statement: "Approved with thanks. The engravings stay at θ = 120° apart, as drawn.",
+  });
+});
+afterAll(async () => { await closeDb(); });
+
+describe("the decision record", () => {
+  it("gathers the circulated revisions, the decision and the whole trail, with the JSON record's final hash", async () => {
+    const member = await viewer(PEOPLE.member);
+    const record = await decisionRecordFor(member, ids.commissionId);
+    const json = await exportRecord(member, ids.commissionId);
+    expect(verifyRecord(json).ok).toBe(true);
+    expect(record.finalHash).toBe(json.finalHash);
+    expect(record.lastSeq).toBe(json.events.length);
+    expect(record.trail.map((e) => e.seq)).toEqual(json.events.map((e) => e.seq));
+    expect(record.commission).toMatchObject({ id: ids.commissionId, title: "Baptismal font for the west end", studioName: "Hollowmere Glass", stageLabel: "Approved" });
+    expect(record.revisions.map((r) => [r.number, r.stateLabel])).toEqual([[1, "Superseded"], [2, "Decided"]]);
+    expect(record.revisions.every((r) => /^[0-9a-f]{64}$/.test(r.contentHash ?? ""))).toBe(true);
+    expect(record.decisions).toHaveLength(1);
+    expect(record.decisions[0]).toMatchObject({ number: 2, outcomeLabel: "Approved as noted", recordedByName: "Margaret Ellery" });
+    expect(record.decisions[0].conditions).toHaveLength(2);
+    expect(record.decisions[0].tally).toMatchObject({ kind: "meeting", inFavour: 3, outcome: "carried" });
+    expect(record.formatId).toBe(json.format);
+  });
+
+  it("renders a PDF that pdf-lib loads, whose text carries the final hash and the decision", async () => {
+    const record = await decisionRecordFor(await viewer(PEOPLE.adviser), ids.commissionId);
+    const bytes = await renderDecisionRecordPdf(record, { verifyUrl: "http://localhost:3000/verify" });
+    const doc = await PDFDocument.load(bytes);
+    expect(doc.getPageCount()).toBeGreaterThanOrEqual(1);
+    const pages = await pdfPageTexts(bytes);
+    const all = pages.join(" ").replace(/\n/g, " ");
+    expect(pages[pages.length - 1]).toContain(record.finalHash);
+    expect(all).toContain(`page ${pages.length} of ${pages.length}`);
+    expect(all).toContain("Revision 2: Approved as noted");
+    expect(all).toContain("stands <= 850 mm above the floor"); // "≤" as the standard fonts can draw it
+    expect(all).toContain("theta = 120°");
+    expect(all).toContain("Created the commission");
+    expect(all).toContain("Margaret Ellery (chair)");
+  });
+
+  it("leaves the studio's drafts out", async () => {
+    const designer = await viewer(PEOPLE.designer);
+    await createDraft(designer, ids.commissionId, { note: "Work in progress" });
+    const record = await decisionRecordFor(designer, ids.commissionId);
+    expect(record.revisions.map((r) => r.number)).toEqual([1, 2]);
+  });
+
+  it("is not found for an outsider, or for a commission that does not exist", async () => {
+    const hazel = await viewer("hazel@lanternhill.test");
+    await expect(decisionRecordFor(hazel, ids.commissionId)).rejects.toBeInstanceOf(NotFoundError);
+    await expect(decisionRecordFor(await viewer(PEOPLE.member), 987654)).rejects.toBeInstanceOf(NotFoundError);
+    await expect(decisionRecordFor(hazel, ids.otherCommissionId)).resolves.toMatchObject({ commission: { id: ids.otherCommissionId } });
+  });
+});
