@@ -1,4 +1,4 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { PDFDocument } from "pdf-lib";
 import { recordMeetingVote } from "@/lib/dal/ballots";
 import { recordDecision } from "@/lib/dal/decisions";
@@ -6,12 +6,22 @@ import { decisionRecordFor } from "@/lib/dal/record";
 import { listRevisions } from "@/lib/dal/revisions-read";
 import { createDraft } from "@/lib/dal/revisions-write";
 import { exportRecord } from "@/lib/dal/trail";
-import { NotFoundError } from "@/lib/errors";
+import { NotFoundError, UnauthenticatedError } from "@/lib/errors";
+import type { Viewer } from "@/lib/dal/viewer";
 import { renderDecisionRecordPdf } from "@/lib/record-pdf";
 import { verifyRecord } from "@/models/trail/node-hash";
 import { pdfPageTexts } from "../pdf-text";
 import { PEOPLE, signedIn } from "./ballot-helpers";
 import { closeDb, freshDemo, viewer } from "./db";
+
+// The route reads the viewer from the request's session; here the test says who is asking.
+const session = vi.hoisted(() => ({ viewer: null as Viewer | null }));
+vi.mock("@/lib/session", () => ({
+  requireViewer: async () => {
+    if (!session.viewer) throw new UnauthenticatedError();
+    return session.viewer;
+  },
+}));
 
 let ids: Awaited<ReturnType<typeof freshDemo>>;
 beforeAll(async () => {
@@ -75,5 +85,36 @@ describe("the decision record", () => {
     await expect(decisionRecordFor(hazel, ids.commissionId)).rejects.toBeInstanceOf(NotFoundError);
     await expect(decisionRecordFor(await viewer(PEOPLE.member), 987654)).rejects.toBeInstanceOf(NotFoundError);
     await expect(decisionRecordFor(hazel, ids.otherCommissionId)).resolves.toMatchObject({ commission: { id: ids.otherCommissionId } });
+  });
+});
+
+describe("GET /api/commissions/{id}/record.pdf", () => {
+  const get = async (id: string) => {
+    const { GET } = await import("@/app/api/commissions/[commissionId]/record.pdf/route");
+    return GET(new Request(`http://localhost/api/commissions/${id}/record.pdf`), { params: Promise.resolve({ commissionId: id }) });
+  };
+
+  it("sends a member the PDF as a private download", async () => {
+    session.viewer = await viewer(PEOPLE.member);
+    const res = await get(String(ids.commissionId));
+    expect(res.status).toBe(200);
+    expect(res.headers.get("content-type")).toBe("application/pdf");
+    expect(res.headers.get("content-disposition")).toBe(`attachment; filename="placet-decision-record-commission-${ids.commissionId}.pdf"`);
+    expect(res.headers.get("cache-control")).toBe("private, no-store");
+    const bytes = new Uint8Array(await res.arrayBuffer());
+    expect(Buffer.from(bytes.subarray(0, 5)).toString("latin1")).toBe("%PDF-");
+    expect(Number(res.headers.get("content-length"))).toBe(bytes.byteLength);
+    const { finalHash } = await exportRecord(session.viewer, ids.commissionId);
+    expect((await pdfPageTexts(bytes)).join("\n")).toContain(finalHash);
+  });
+
+  it("answers 404 to an outsider and to an id that is not a number, 401 to nobody, never a 500", async () => {
+    session.viewer = await viewer("hazel@lanternhill.test");
+    const outsider = await get(String(ids.commissionId));
+    expect(outsider.status).toBe(404);
+    expect(await outsider.json()).toEqual({ error: "Not found." });
+    for (const bad of ["abc", "0", "-1", "1.5", "99999999999999999999"]) expect((await get(bad)).status).toBe(404);
+    session.viewer = null;
+    expect((await get(String(ids.commissionId))).status).toBe(401);
   });
 });
