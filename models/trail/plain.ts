@@ -26,7 +26,7 @@ export function describeEvent(e: Pick<TrailEvent, "action" | "payload" | "subjec
       return `Changed ${s(p.email)} from ${ROLE[s(from?.role)] ?? s(from?.role)} to ${ROLE[s(to?.role)] ?? s(to?.role)}${to?.treasurer ? " (treasurer)" : ""}.`;
     }
     case "ballot rules changed": return "Changed the committee's ballot rules.";
-    case "stage changed": return `Moved the commission from ${stage(p.from)} to ${stage(p.to)}${p.reason ? `: ${s(p.reason)}` : "."}`;
+    case "stage changed": return `Moved the commission from ${stage(p.from)} to ${stage(p.to)}${p.reason ? `: ${s(p.reason)}.` : "."}`;
     case "revision drafted": return `Started drafting Revision ${s(p.number)}.`;
     case "revision updated": return `Worked on the draft of Revision ${s(p.number)}${Array.isArray(p.changed) && p.changed.length ? ` (${p.changed.length} value${p.changed.length === 1 ? "" : "s"} changed)` : ""}.`;
     case "attachment added": return `Attached a file (${s(p.kind).toUpperCase()}) to the draft of Revision ${s(p.number)}.`;
