@@ -38,7 +38,7 @@ function CameraRig({ orbit, target, distance }: { orbit: Orbit; target: [number,
 }
 
 export default function FontViewerCanvas(props: CanvasProps) {
-  const { params, ghostParams, pins = [], onPickPoint, initialSection = false, initialWater = true } = props;
+  const { params, ghostParams, pins = [], onPickPoint, onPinSelect, initialSection = false, initialWater = true } = props;
   const [orbit, setOrbit] = useState<Orbit>(initialSection ? { ...initialOrbit, azimuthDeg: 12 } : initialOrbit);
   const [section, setSection] = useState(initialSection);
   const [water, setWater] = useState(initialWater);
@@ -140,13 +140,19 @@ export default function FontViewerCanvas(props: CanvasProps) {
       </div>
 
       {pins.length > 0 && (
-        <ol className="list-decimal pl-6 text-sm text-ink-soft" aria-label="Points marked on the model">
+        <ul className="grid gap-1 text-sm text-ink-soft" aria-label="Points marked on the model">
           {pins.map((p) => (
             <li key={p.id}>
-              <span className="text-ink">{p.label}</span> — on the {p.part}
+              {onPinSelect ? (
+                <button type="button" className="min-h-11 text-left text-action underline-offset-2 hover:underline" onClick={() => onPinSelect(p.id)}>
+                  Comment {p.label} — on the {p.part}
+                </button>
+              ) : (
+                <span><span className="text-ink">Comment {p.label}</span> — on the {p.part}</span>
+              )}
             </li>
           ))}
-        </ol>
+        </ul>
       )}
     </div>
   );

@@ -17,6 +17,8 @@ export interface FontViewerProps {
   pins?: ViewerPin[];
   /** called when someone clicks or taps a point on the model (not at the end of a drag) */
   onPickPoint?: (part: FontPart, pointMm: PointMm) => void;
+  /** called when someone chooses a pin from the list under the picture (e.g. to open its comment thread) */
+  onPinSelect?: (pinId: string) => void;
   /** units for the text summary */
   units?: LengthUnit;
   initialSection?: boolean;

@@ -79,6 +79,7 @@ export function RevisionView({ initial, commissionId }: { initial: RevisionDto; 
         <h3 id="model-h" className="font-serif text-2xl font-semibold">The model</h3>
         {rev.you.canComment && <p className="text-sm text-ink-soft">Tap the model to comment on that exact spot.</p>}
         <FontViewer params={params} units={units} pins={threadModelPins(threads.data ?? [])}
+          onPinSelect={(id) => { setFocused(Number(id)); document.getElementById(`comment-${id}`)?.scrollIntoView({ behavior: "smooth" }); }}
           onPickPoint={rev.you.canComment ? (part, point) => pick({ kind: "model", part, point }) : undefined} />
       </section>
 

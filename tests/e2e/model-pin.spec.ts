@@ -24,9 +24,20 @@ test("a member taps the 3D model to pin a comment on that spot, and the pin show
   const thread = page.locator("article, li, div").filter({ hasText: words }).last();
   await expect(thread).toBeVisible();
   await page.screenshot({ path: `.data/screenshots/model-pin-${info.project.name}.png`, fullPage: false });
-  const [row] = await sql<{ target: string }[]>("SELECT target FROM comments WHERE body = ?", [words]);
+  const [row] = await sql<{ id: number; target: string }[]>("SELECT id, target FROM comments WHERE body = ?", [words]);
   const target = JSON.parse(row.target);
   expect(target.kind).toBe("model");
   expect(["bowl", "foot", "pedestal"]).toContain(target.part);
   expect(target.point).toHaveLength(3);
+
+  // The pin is listed under the model; choosing it brings its thread into view.
+  const [r] = await sql<{ revision_id: number }[]>("SELECT revision_id FROM comments WHERE id = ?", [row.id]);
+  const listed = await (await page.request.get(`/api/revisions/${r.revision_id}/comments`)).json();
+  const mine = listed.threads.find((t: { id: number }) => t.id === row.id);
+  await page.getByTestId("font-canvas").scrollIntoViewIfNeeded();
+  const pins = page.getByRole("list", { name: "Points marked on the model" });
+  const button = pins.getByRole("button", { name: `Comment ${mine.number} — on the ${target.part}` });
+  await expect(button).toBeVisible();
+  await button.click();
+  await expect(page.locator(`#comment-${row.id}`)).toBeInViewport();
 });

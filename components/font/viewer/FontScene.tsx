@@ -114,7 +114,7 @@ export function FontScene({ params, ghostParams, section, water, pins, pinColour
               className="block translate-y-[-1.4rem] whitespace-nowrap rounded bg-card px-1.5 text-xs font-semibold text-record shadow"
               title={pin.label}
             >
-              {i + 1}
+              {pin.label || i + 1}
             </span>
           </Html>
         </group>
