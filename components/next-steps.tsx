@@ -1,18 +1,41 @@
+import Link from "next/link";
 import type { CommissionDto } from "@/lib/dal/commissions";
+import type { RevisionSummaryDto } from "@/lib/dal/revisions-read";
+import type { BallotStateDto } from "@/models/ballot/state";
 import { Card } from "./ui/card";
 
-/** What happens next, in plain words, for the viewer's role and the commission's stage. */
-export function NextSteps({ commission: c }: { commission: CommissionDto }) {
+const when = new Intl.DateTimeFormat("en-GB", { dateStyle: "medium", timeStyle: "short", timeZone: "UTC" });
+
+interface Props { commission: CommissionDto; current?: RevisionSummaryDto | null; ballot?: BallotStateDto | null }
+
+/** What happens next, in plain words, for the viewer's role, the commission's stage and the current ballot. */
+export function NextSteps({ commission: c, current = null, ballot = null }: Props) {
   const studio = Boolean(c.you.studioRole);
   const chair = c.you.committeeRole === "chair";
-  const steps: string[] = [];
+  const open = ballot?.ballot?.status === "open" ? ballot.ballot : null;
+  const closed = ballot?.ballot?.status === "closed" ? ballot : null;
+  const link = current ? `/commissions/${c.id}/revisions/${current.number}` : `/commissions/${c.id}/revisions`;
+  const steps: React.ReactNode[] = [];
   switch (c.stage) {
     case "brief":
     case "concept":
     case "design-development":
-      if (studio) steps.push("Draft the next revision and circulate it to the committee when it is ready.");
-      if (chair) steps.push("When a revision has been circulated and discussed, open a ballot or record the meeting's vote, then record the decision.");
-      if (!studio && !chair) steps.push("Read each circulated revision, comment on anything you want changed, and vote when the chair opens a ballot.");
+      if (!current) {
+        steps.push(studio ? "Draft the first revision and circulate it to the committee when it is ready." : "The studio will circulate the first revision here; you will get an e-mail.");
+        break;
+      }
+      if (open) {
+        const until = open.closesAt ? ` until ${when.format(new Date(open.closesAt))} UTC` : "";
+        if (ballot?.youMayVote) steps.push(<>A ballot on <Link href={link}>Revision {current.number}</Link> is open{until}. {ballot.yourVote ? "You have voted; you may change your vote until it closes." : "Your vote is awaited."}</>);
+        else steps.push(<>A ballot on <Link href={link}>Revision {current.number}</Link> is open{until}; {ballot?.tally?.ballotsCast ?? 0} of {ballot?.tally?.votingMembers ?? 0} have voted.</>);
+        if (chair) steps.push("When it closes (or when you close it), record the committee's decision.");
+      } else if (chair && current.state === "circulated") {
+        steps.push(closed ? <>The ballot on <Link href={link}>Revision {current.number}</Link> closed: {closed.result?.outcomeLabel ?? "see the result"}. Record the committee&apos;s decision.</> : <>Open a ballot on <Link href={link}>Revision {current.number}</Link>, or record the vote taken at a meeting, then record the decision.</>);
+      } else if (!studio) {
+        steps.push(<>Read <Link href={link}>Revision {current.number}</Link> and comment on anything you want changed, on the drawing or the model itself.</>);
+      } else {
+        steps.push(<>Revision {current.number} is with the committee. Answer their comments; draft the next revision when changes are asked for.</>);
+      }
       break;
     case "approved":
       steps.push("The design is approved. Fabrication is released once every required permission is recorded and the deposit is paid.");
@@ -28,7 +51,7 @@ export function NextSteps({ commission: c }: { commission: CommissionDto }) {
   }
   return (
     <Card title="What happens next">
-      <ul className="list-disc space-y-1 pl-5" data-testid="next-steps">{steps.map((s) => <li key={s}>{s}</li>)}</ul>
+      <ul className="list-disc space-y-1 pl-5" data-testid="next-steps">{steps.map((s, i) => <li key={i}>{s}</li>)}</ul>
     </Card>
   );
 }

@@ -6,6 +6,9 @@ test("a committee member signs in by the e-mailed link and sees only their commi
   const list = page.getByTestId("commission-list");
   await expect(list.getByText("Baptismal font for the west end")).toBeVisible();
   await expect(list.getByText("Font and cover for the new chapel")).toHaveCount(0);
+  await list.getByText("Baptismal font for the west end").click();
+  await expect(page.getByTestId("next-steps")).toContainText("Read Revision 2");
+  await expect(page.getByTestId("current-revision")).toContainText("Circulated");
   const rows = await sql<{ id: number }[]>("SELECT id FROM commissions WHERE title = 'Font and cover for the new chapel'");
   await page.goto(`/commissions/${rows[0].id}`);
   await expect(page.getByRole("heading", { name: "Not found" })).toBeVisible();

@@ -22,7 +22,7 @@ export default async function CommissionPage({ params }: { params: Promise<{ com
   return (
     <div className="grid gap-4 lg:grid-cols-3">
       <div className="grid gap-4 lg:col-span-2">
-        <NextSteps commission={c} />
+        <NextSteps commission={c} current={current} ballot={ballot} />
         <CurrentRevision commissionId={c.id} revision={current} ballot={ballot} draft={draft} />
         <Card title="How this committee decides" action={c.rulesEditable ? <Link href={`/commissions/${c.id}/rules`} className="min-h-11 py-2">Edit the rules</Link> : undefined}>
           <RulesSummary rules={c.rules} />
