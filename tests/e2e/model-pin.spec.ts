@@ -21,9 +21,10 @@ test("a member taps the 3D model to pin a comment on that spot, and the pin show
   const words = `Is this spot where the engraving goes? ${unique("m")}`;
   await page.getByLabel("Your comment").fill(words);
   await page.getByRole("button", { name: "Post comment" }).click();
-  const thread = page.locator("article, li, div").filter({ hasText: words }).last();
+  const thread = page.getByTestId("comment-thread").filter({ hasText: words });
   await expect(thread).toBeVisible();
   await page.screenshot({ path: `.data/screenshots/model-pin-${info.project.name}.png`, fullPage: false });
+  await expect.poll(async () => (await sql<unknown[]>("SELECT id FROM comments WHERE body = ?", [words])).length).toBe(1);
   const [row] = await sql<{ id: number; target: string }[]>("SELECT id, target FROM comments WHERE body = ?", [words]);
   const target = JSON.parse(row.target);
   expect(target.kind).toBe("model");
