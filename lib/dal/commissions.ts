@@ -1,11 +1,11 @@
 import "server-only";
 import { and, asc, desc, eq, inArray, or } from "drizzle-orm";
-import { getDb } from "@/db/client";
+import { getDb, type Db } from "@/db/client";
 import { commissionMembers, commissions, studioMembers, studios, trailEvents, users } from "@/db/schema";
 import { can, ACTIONS, invitableRoles, type Action, type CommitteeRole } from "@/models/permissions/policy";
 import { commissionSchema, fieldErrors } from "@/models/schemas/people";
 import { ballotRulesSchema, type BallotRules } from "@/models/ballot";
-import { appendTrail, lockCommission } from "../trail";
+import { appendTrail, lockCommission, type Tx } from "../trail";
 import { ConflictError, ValidationError } from "../errors";
 import { authorize, loadAccess } from "./access";
 import { requireStudio, type Viewer } from "./viewer";
@@ -121,8 +121,7 @@ async function listPeopleRows(commissionId: number, studioId: number): Promise<P
 }
 
 /** Rules are fixed once the first ballot (electronic or at a meeting) has been opened or recorded. */
-export async function rulesLocked(commissionId: number): Promise<boolean> {
-  const db = getDb();
+export async function rulesLocked(commissionId: number, db: Db | Tx = getDb()): Promise<boolean> {
   const rows = await db
     .select({ id: trailEvents.id })
     .from(trailEvents)
@@ -171,7 +170,7 @@ async function updateRulesTx(viewer: Viewer, access: Awaited<ReturnType<typeof a
   const commissionId = access.commission.id;
   return db.transaction(async (tx) => {
     await lockCommission(tx, commissionId);
-    if (await rulesLocked(commissionId)) throw new ConflictError("The ballot rules are fixed once a ballot has been opened.");
+    if (await rulesLocked(commissionId, tx)) throw new ConflictError("The ballot rules are fixed once a ballot has been opened.");
     const [fresh] = await tx.select().from(commissions).where(eq(commissions.id, commissionId));
     const before = rulesOf(fresh);
     await tx.update(commissions).set({

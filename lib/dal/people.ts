@@ -8,7 +8,7 @@ import { env } from "../env";
 import { ForbiddenError, ValidationError } from "../errors";
 import { enqueueMail } from "../outbox";
 import { appendTrail, lockCommission } from "../trail";
-import { authorize, loadAccess } from "./access";
+import { loadAccess } from "./access";
 import type { Viewer } from "./viewer";
 
 export interface InviteResult {
@@ -75,5 +75,3 @@ export async function invitePerson(viewer: Viewer, commissionId: number, input: 
   });
 }
 
-/** Re-exported for pages that need the guard without the rest. */
-export { authorize };

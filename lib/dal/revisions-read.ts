@@ -5,8 +5,8 @@ import { attachments, revisions, users } from "@/db/schema";
 import { can } from "@/models/permissions/policy";
 import { REVISION_STATE_LABELS, visibleToCommittee, type RevisionState } from "@/models/revision";
 import { evaluateFont, type FontFigures, type FontParameters } from "@/models/font";
-import { loadAccess } from "./access";
-import { loadRevisionById, type RevisionRow } from "./revision-access";
+import { loadAccess, type Access } from "./access";
+import { loadRevision, loadRevisionById, type RevisionRow } from "./revision-access";
 import type { Viewer } from "./viewer";
 
 export interface AttachmentDto {
@@ -71,7 +71,16 @@ export async function listRevisions(viewer: Viewer, commissionId: number): Promi
 
 export async function getRevision(viewer: Viewer, revisionId: number): Promise<RevisionDto> {
   const db = getDb();
-  const { access, revision: r } = await loadRevisionById(db, viewer, revisionId);
+  return revisionDto(viewer, await loadRevisionById(db, viewer, revisionId));
+}
+
+/** The revision a page URL names (commission and number), with the same access check, loaded once. */
+export async function getRevisionByNumber(viewer: Viewer, commissionId: number, number: number): Promise<RevisionDto> {
+  return revisionDto(viewer, await loadRevision(getDb(), viewer, commissionId, number));
+}
+
+async function revisionDto(viewer: Viewer, { access, revision: r }: { access: Access; revision: RevisionRow }): Promise<RevisionDto> {
+  const db = getDb();
   const files = await db.select().from(attachments).where(eq(attachments.revisionId, r.id)).orderBy(asc(attachments.position), asc(attachments.id));
   let figures = r.figures as FontFigures | null;
   if (!figures) {
@@ -92,10 +101,4 @@ export async function getRevision(viewer: Viewer, revisionId: number): Promise<R
       units: viewer.units,
     },
   };
-}
-
-/** Finds a revision's id from the commission and number (the page URL), with the same access check. */
-export async function revisionIdFor(viewer: Viewer, commissionId: number, number: number): Promise<number> {
-  const { loadRevision } = await import("./revision-access");
-  return (await loadRevision(getDb(), viewer, commissionId, number)).revision.id;
 }

@@ -2,7 +2,7 @@
 import { redirect } from "next/navigation";
 import { requireViewer } from "@/lib/session";
 import { createCommission } from "@/lib/dal/commissions";
-import { isKnownError, ValidationError } from "@/lib/errors";
+import { formErrors } from "@/lib/action-errors";
 
 export interface NewCommissionState { errors?: Record<string, string>; values?: Record<string, string> }
 
@@ -12,10 +12,7 @@ export async function createCommissionAction(_prev: NewCommissionState, form: Fo
   try {
     ({ id } = await createCommission(await requireViewer(), values));
   } catch (err) {
-    if (err instanceof ValidationError) return { errors: err.fields, values };
-    if (isKnownError(err)) return { errors: { _form: err.message }, values };
-    console.error(err);
-    return { errors: { _form: "The commission could not be created. Nothing was saved." }, values };
+    return { errors: formErrors(err, "The commission could not be created. Nothing was saved."), values };
   }
   redirect(`/commissions/${id}`);
 }

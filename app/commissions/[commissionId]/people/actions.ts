@@ -2,7 +2,7 @@
 import { revalidatePath } from "next/cache";
 import { requireViewer } from "@/lib/session";
 import { invitePerson } from "@/lib/dal/people";
-import { isKnownError, ValidationError } from "@/lib/errors";
+import { formErrors } from "@/lib/action-errors";
 
 export interface InviteState { ok?: string; errors?: Record<string, string>; values?: Record<string, string> }
 
@@ -15,9 +15,6 @@ export async function inviteAction(commissionId: number, _prev: InviteState, for
     const msg = res.created ? `Invited ${values.email}. They will get an e-mail.` : res.roleChanged ? `Changed the role of ${values.email}.` : `${values.email} is already on this commission.`;
     return { ok: msg };
   } catch (err) {
-    if (err instanceof ValidationError) return { errors: err.fields, values };
-    if (isKnownError(err)) return { errors: { _form: err.message }, values };
-    console.error(err);
-    return { errors: { _form: "The invitation could not be saved. Nothing was changed." }, values };
+    return { errors: formErrors(err, "The invitation could not be saved. Nothing was changed."), values };
   }
 }

@@ -3,7 +3,7 @@ import { revalidatePath } from "next/cache";
 import { redirect } from "next/navigation";
 import { requireViewer } from "@/lib/session";
 import { updateRules } from "@/lib/dal/commissions";
-import { isKnownError, ValidationError } from "@/lib/errors";
+import { formErrors } from "@/lib/action-errors";
 
 export interface RulesState { errors?: Record<string, string> }
 
@@ -19,10 +19,7 @@ export async function rulesAction(commissionId: number, _prev: RulesState, form:
   try {
     await updateRules(await requireViewer(), commissionId, input);
   } catch (err) {
-    if (err instanceof ValidationError) return { errors: err.fields };
-    if (isKnownError(err)) return { errors: { _form: err.message } };
-    console.error(err);
-    return { errors: { _form: "The rules could not be saved. Nothing was changed." } };
+    return { errors: formErrors(err, "The rules could not be saved. Nothing was changed.") };
   }
   revalidatePath(`/commissions/${commissionId}`, "layout");
   redirect(`/commissions/${commissionId}`);

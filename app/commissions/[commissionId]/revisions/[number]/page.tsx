@@ -1,9 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { notFound } from "next/navigation";
-import { commissionForPage } from "@/lib/page-data";
-import { getRevision, listRevisions, revisionIdFor } from "@/lib/dal/revisions-read";
-import { NotFoundError } from "@/lib/errors";
+import { commissionForPage, orNotFound, routeId } from "@/lib/page-data";
+import { getRevisionByNumber, listRevisions } from "@/lib/dal/revisions-read";
 import { RevisionView } from "@/components/revision/RevisionView";
 import { buttonClass } from "@/components/ui/button";
 
@@ -12,8 +10,7 @@ export const metadata: Metadata = { title: "Revision" };
 export default async function RevisionPage({ params }: { params: Promise<{ commissionId: string; number: string }> }) {
   const { commissionId, number } = await params;
   const { viewer, commission: c } = await commissionForPage(commissionId, `/commissions/${commissionId}/revisions/${number}`);
-  const n = /^\d{1,6}$/.test(number) ? Number(number) : NaN;
-  const rev = await revisionIdFor(viewer, c.id, n).then((id) => getRevision(viewer, id)).catch((e) => { if (e instanceof NotFoundError) notFound(); throw e; });
+  const rev = await orNotFound(getRevisionByNumber(viewer, c.id, routeId(number)));
   const others = (await listRevisions(viewer, c.id)).filter((r) => r.number !== rev.number && r.state !== "draft");
   const base = `/commissions/${c.id}/revisions`;
   return (

@@ -1,9 +1,8 @@
 import type { Metadata } from "next";
 import { notFound, redirect } from "next/navigation";
-import { commissionForPage } from "@/lib/page-data";
-import { getRevision, revisionIdFor } from "@/lib/dal/revisions-read";
+import { commissionForPage, orNotFound, routeId } from "@/lib/page-data";
+import { getRevisionByNumber } from "@/lib/dal/revisions-read";
 import { settingsForCommission } from "@/lib/dal/studio";
-import { NotFoundError } from "@/lib/errors";
 import { DraftEditor } from "@/components/revision/DraftEditor";
 import { DraftAttachments } from "@/components/revision/DraftAttachments";
 import { defaultFontParameters, parseFontParameters } from "@/models/font";
@@ -13,8 +12,7 @@ export const metadata: Metadata = { title: "Edit draft" };
 export default async function EditRevisionPage({ params }: { params: Promise<{ commissionId: string; number: string }> }) {
   const { commissionId, number } = await params;
   const { viewer, commission: c } = await commissionForPage(commissionId, `/commissions/${commissionId}/revisions/${number}/edit`);
-  const n = /^\d{1,6}$/.test(number) ? Number(number) : NaN;
-  const rev = await revisionIdFor(viewer, c.id, n).then((id) => getRevision(viewer, id)).catch((e) => { if (e instanceof NotFoundError) notFound(); throw e; });
+  const rev = await orNotFound(getRevisionByNumber(viewer, c.id, routeId(number)));
   if (!rev.you.canEdit) {
     if (rev.state !== "draft") redirect(`/commissions/${c.id}/revisions/${rev.number}`);
     notFound();

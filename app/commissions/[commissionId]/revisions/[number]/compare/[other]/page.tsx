@@ -1,17 +1,14 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { notFound, redirect } from "next/navigation";
-import { commissionForPage } from "@/lib/page-data";
-import { getRevision, listRevisions, revisionIdFor, type RevisionDto } from "@/lib/dal/revisions-read";
-import { NotFoundError } from "@/lib/errors";
+import { redirect } from "next/navigation";
+import { commissionForPage, orNotFound, routeId } from "@/lib/page-data";
+import { getRevisionByNumber, listRevisions, type RevisionDto } from "@/lib/dal/revisions-read";
 import { parseFontParameters } from "@/models/font";
 import { CompareView } from "@/components/compare/CompareView";
 import type { CompareSide } from "@/components/compare/types";
 import { buttonClass } from "@/components/ui/button";
 
 export const metadata: Metadata = { title: "Compare revisions" };
-
-const revNumber = (raw: string) => (/^\d{1,6}$/.test(raw) ? Number(raw) : NaN);
 
 function side(r: RevisionDto): CompareSide {
   const parsed = parseFontParameters(r.params);
@@ -28,15 +25,12 @@ export default async function ComparePage({ params }: { params: Promise<Params> 
   const { commissionId, number, other } = await params;
   const path = `/commissions/${commissionId}/revisions/${number}/compare/${other}`;
   const { viewer, commission: c } = await commissionForPage(commissionId, path);
-  const a = revNumber(number);
-  const b = revNumber(other);
-  if (a === b && Number.isFinite(a)) redirect(`/commissions/${c.id}/revisions/${a}`);
+  const a = routeId(number);
+  const b = routeId(other);
+  if (a === b) redirect(`/commissions/${c.id}/revisions/${a}`);
   // Both go through the data-access layer: a draft is found only by the studio; anything else is not found.
-  const load = (n: number) => revisionIdFor(viewer, c.id, n).then((id) => getRevision(viewer, id));
-  const [x, y] = await Promise.all([load(a), load(b)]).catch((e) => {
-    if (e instanceof NotFoundError) notFound();
-    throw e;
-  });
+  const load = (n: number) => getRevisionByNumber(viewer, c.id, n);
+  const [x, y] = await orNotFound(Promise.all([load(a), load(b)]));
   const [older, newer] = x.number < y.number ? [x, y] : [y, x];
   const base = `/commissions/${c.id}/revisions`;
   const others = (await listRevisions(viewer, c.id)).filter((r) => r.number !== older.number && r.number !== newer.number);
