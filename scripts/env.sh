@@ -1,6 +1,8 @@
 # Shared settings for the project's scripts. Sourced, not run.
 ROOT="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
 export ROOT
+# Local overrides (ports, a second checkout beside this one): .ports.local is never committed.
+[ -f "$ROOT/.ports.local" ] && source "$ROOT/.ports.local"
 export DATA_DIR="${DATA_DIR:-$ROOT/.data}"
 export DB_PORT="${DB_PORT:-3307}"
 export DB_NAME="${DB_NAME:-placet}"
