@@ -1,6 +1,6 @@
 "use client";
 import { useMemo, useState } from "react";
-import { formatList, type LengthUnit } from "@/models/font";
+import { formatList, modelFont, type LengthUnit } from "@/models/font";
 import { FontCautions, FontViewer } from "@/components/font";
 import { UnitsToggle } from "@/components/revision/UnitsToggle";
 import { CopyHash } from "@/components/copy-hash";
@@ -34,6 +34,9 @@ export function CompareView({ older, newer, initialUnits }: { older: CompareSide
   const [onlyChanges, setOnlyChanges] = useState(false);
   const params = useMemo(() => parameterRows(older.params, newer.params, units), [older, newer, units]);
   const figures = useMemo(() => figureRows(older.figures, newer.figures, units), [older, newer, units]);
+  // Each form worked out once, with the figures the server sent.
+  const newerModel = useMemo(() => (newer.validParams ? modelFont(newer.validParams, newer.figures) : null), [newer]);
+  const olderModel = useMemo(() => (older.validParams ? modelFont(older.validParams, older.figures) : null), [older]);
   const changed = params.filter((r) => r.change).length + figures.filter((r) => r.change).length;
   const o = `Revision ${older.number}`;
   const n = `Revision ${newer.number}`;
@@ -64,9 +67,9 @@ export function CompareView({ older, newer, initialUnits }: { older: CompareSide
       <CompareTable caption="Parameters" rows={params} olderLabel={o} newerLabel={n} onlyChanges={onlyChanges} testId="compare-parameters" />
       <section aria-labelledby="model-h" className="grid gap-2">
         <h3 id="model-h" className="font-serif text-2xl font-semibold">The two forms</h3>
-        {newer.validParams ? (
+        {newerModel ? (
           <>
-            <FontViewer params={newer.validParams} ghostParams={older.validParams} units={units}
+            <FontViewer model={newerModel} ghost={olderModel} units={units}
               label={`3D view of ${n}, with ${o} drawn faintly behind it`} />
             <p className="text-sm text-ink-soft">{n} is drawn solid; {older.validParams ? `${o} is the faint outline behind it.` : `${o} cannot be drawn: its values do not make a valid font.`}</p>
           </>

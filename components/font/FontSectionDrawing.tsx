@@ -1,11 +1,10 @@
-import { fontProfile, type FontParameters, type ProfilePoint } from "@/models/font";
+import type { FontProfile, ProfilePoint } from "@/models/font";
 
 /**
  * A flat cross-section of the font drawn from the same lathe profile as the 3D view: the plain
  * picture shown when WebGL is missing or lost. No three.js here.
  */
-export function FontSectionDrawing({ params, className = "" }: { params: FontParameters; className?: string }) {
-  const prof = fontProfile(params);
+export function FontSectionDrawing({ profile: prof, className = "" }: { profile: FontProfile; className?: string }) {
   const g = prof.geometry;
   const halfWidth = Math.max(g.outerRimRadius, g.pedestalRadius) * 1.1;
   const height = g.rimZ * 1.05;

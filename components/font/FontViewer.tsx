@@ -4,10 +4,11 @@
  * The 3D view of a font, loaded lazily: three.js and react-three-fiber are fetched only when a page
  * shows this component, and never rendered on the server. Without WebGL (or if its context is lost)
  * a flat cross-section drawn from the same profile stands in. The text summary is always present.
+ * Everything is read from the model it is given; nothing here works the font out again.
  */
 import dynamic from "next/dynamic";
 import { Component, useEffect, useId, useMemo, useState, type ReactNode } from "react";
-import { computeFontFigures, describeFont } from "@/models/font";
+import { describeFont } from "@/models/font";
 import { buttonClass } from "@/components/ui/button";
 import { FontSectionDrawing } from "./FontSectionDrawing";
 import { hasWebGL } from "./webgl";
@@ -43,7 +44,7 @@ class ViewerErrorBoundary extends Component<{ fallback: ReactNode; children: Rea
 type Mode = "checking" | "3d" | "no-webgl" | "lost";
 
 export function FontViewer(props: FontViewerProps) {
-  const { params, units = "mm", className = "", label = "3D view of the font" } = props;
+  const { model, units = "mm", className = "", label = "3D view of the font" } = props;
   const summaryId = useId();
   const [mode, setMode] = useState<Mode>("checking");
   const [attempt, setAttempt] = useState(0);
@@ -52,11 +53,11 @@ export function FontViewer(props: FontViewerProps) {
     setMode(hasWebGL() ? "3d" : "no-webgl");
   }, []);
 
-  const summary = useMemo(() => describeFont(params, computeFontFigures(params), units), [params, units]);
+  const summary = useMemo(() => describeFont(model.params, model.figures, units), [model, units]);
 
   const fallback = (why: string, retry: boolean) => (
     <div className={`${frame} flex flex-col items-center justify-center gap-3 p-4`}>
-      <FontSectionDrawing params={params} className="h-3/4 w-full text-ink" />
+      <FontSectionDrawing profile={model.profile} className="h-3/4 w-full text-ink" />
       <p className="text-center font-sans text-sm text-ink-soft">{why}</p>
       {retry && (
         <button

@@ -1,4 +1,4 @@
-import type { FontParameters, FontPart, LengthUnit } from "@/models/font";
+import type { FontModel, FontPart, LengthUnit } from "@/models/font";
 
 /** A point on the model in model millimetres: x, y across the floor, z up from the floor. */
 export type PointMm = [x: number, y: number, z: number];
@@ -11,9 +11,10 @@ export interface ViewerPin {
 }
 
 export interface FontViewerProps {
-  params: FontParameters;
+  /** the form, worked out once by whoever shows it (modelFont, or the editor's evaluation) */
+  model: FontModel;
   /** an older form drawn faintly behind, for comparing revisions */
-  ghostParams?: FontParameters | null;
+  ghost?: FontModel | null;
   pins?: ViewerPin[];
   /** called when someone clicks or taps a point on the model (not at the end of a drag) */
   onPickPoint?: (part: FontPart, pointMm: PointMm) => void;

@@ -1,7 +1,7 @@
 "use client";
-import { useState } from "react";
+import { useMemo, useState } from "react";
 import type { RevisionDto } from "@/lib/dal/revisions-read";
-import type { FontFigures as Figures, FontParameters, LengthUnit } from "@/models/font";
+import { modelFont, type FontFigures as Figures, type FontParameters, type LengthUnit } from "@/models/font";
 import { FontFigures, FontViewer } from "@/components/font";
 import { Badge } from "@/components/ui/card";
 import { CopyHash } from "@/components/copy-hash";
@@ -25,7 +25,8 @@ export function RevisionView({ initial, commissionId }: { initial: RevisionDto; 
   const [target, setTarget] = useState<CommentTarget | null>(null);
   const [focused, setFocused] = useState<number | null>(null);
   const threads = useCommentThreads(rev.id);
-  const params = rev.params as FontParameters;
+  // The form worked out once, with the figures the server sent rather than working them out again.
+  const model = useMemo(() => modelFont(rev.params as FontParameters, rev.figures as Figures | null), [rev.params, rev.figures]);
   const pick = (t: CommentTarget) => { if (rev.you.canComment) { setTarget(t); document.getElementById("comments")?.scrollIntoView({ behavior: "smooth" }); } };
 
   return (
@@ -78,7 +79,7 @@ export function RevisionView({ initial, commissionId }: { initial: RevisionDto; 
       <section aria-labelledby="model-h" className="grid gap-2">
         <h3 id="model-h" className="font-serif text-2xl font-semibold">The model</h3>
         {rev.you.canComment && <p className="text-sm text-ink-soft">Tap the model to comment on that exact spot.</p>}
-        <FontViewer params={params} units={units} pins={threadModelPins(threads.data ?? [])}
+        <FontViewer model={model} units={units} pins={threadModelPins(threads.data ?? [])}
           onPinSelect={(id) => { setFocused(Number(id)); document.getElementById(`comment-${id}`)?.scrollIntoView({ behavior: "smooth" }); }}
           onPickPoint={rev.you.canComment ? (part, point) => pick({ kind: "model", part, point }) : undefined} />
       </section>

@@ -4,7 +4,7 @@
  * Never throws: unusable input comes back as problems that name the field.
  */
 import { fontParametersSchema } from "./schema";
-import { fontProfile } from "./profile";
+import { fontProfile, type FontProfile } from "./profile";
 import { engravingAngles } from "./engravings";
 import { degToRad } from "./units";
 import {
@@ -80,7 +80,16 @@ export function gritLabel(st: Pick<AbrasiveStage, "grit" | "gritScale">): string
   return st.gritScale.toLowerCase() === "mesh" ? `${st.grit} mesh` : `${st.gritScale} ${st.grit}`;
 }
 
-export function planColdWorking(params: unknown, studioSettings: unknown, choice: ColdWorkingChoice = {}): ColdWorkingResult {
+/**
+ * A profile already built from the same parameters (e.g. a FontModel's) can be passed to skip
+ * rebuilding it.
+ */
+export function planColdWorking(
+  params: unknown,
+  studioSettings: unknown,
+  choice: ColdWorkingChoice = {},
+  profile?: FontProfile,
+): ColdWorkingResult {
   const p = fontParametersSchema.safeParse(params);
   const s = studioSettingsSchema.safeParse(studioSettings);
   if (!p.success || !s.success) {
@@ -108,7 +117,7 @@ export function planColdWorking(params: unknown, studioSettings: unknown, choice
   }
   const stages: PlannedStage[] = set.stages.map((st, i) => ({ ...st, order: i + 1, label: gritLabel(st) }));
 
-  const g = fontProfile(params_).geometry;
+  const g = (profile ?? fontProfile(params_)).geometry;
   const areaMm2: Record<ColdWorkedSurface, number> = {
     footBase: Math.PI * params_.footBaseRadius ** 2,
     footTop: Math.PI * params_.footTopRadius ** 2,

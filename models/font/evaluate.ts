@@ -4,6 +4,7 @@
  */
 import { z } from "zod";
 import { computeFontFigures, type FontFigures } from "./figures";
+import { fontProfile, type FontProfile } from "./profile";
 import { fontParametersSchema } from "./schema";
 import type { FontFieldErrors, FontParameters } from "./types";
 
@@ -18,11 +19,30 @@ export function parseFontParameters(input: unknown): FontParseResult {
   return { ok: false, fieldErrors: flat.fieldErrors as FontFieldErrors, formErrors: flat.formErrors };
 }
 
+/**
+ * One font worked out once: its parameters, the lathe profile built from them and the figures
+ * integrated from that profile. Views read this instead of going back to the parameters.
+ */
+export interface FontModel {
+  params: FontParameters;
+  profile: FontProfile;
+  figures: FontFigures;
+}
+
+/**
+ * The model of parameters that passed fontParametersSchema. Figures already worked out for the same
+ * parameters (e.g. those a server stored with a revision) are used as they are.
+ */
+export function modelFont(params: FontParameters, figures?: FontFigures | null): FontModel {
+  const profile = fontProfile(params);
+  return { params, profile, figures: figures ?? computeFontFigures(params, profile) };
+}
+
 export type FontEvaluation =
-  | { ok: true; params: FontParameters; figures: FontFigures }
+  | ({ ok: true } & FontModel)
   | { ok: false; fieldErrors: FontFieldErrors; formErrors: string[] };
 
 export function evaluateFont(input: unknown): FontEvaluation {
   const r = parseFontParameters(input);
-  return r.ok ? { ...r, figures: computeFontFigures(r.params) } : r;
+  return r.ok ? { ok: true, ...modelFont(r.params) } : r;
 }

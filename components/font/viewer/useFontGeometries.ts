@@ -2,11 +2,10 @@
 
 import { useEffect, useMemo } from "react";
 import type { BufferGeometry } from "three";
-import { fontProfile, type FontParameters, type FontProfile } from "@/models/font";
+import type { FontProfile } from "@/models/font";
 import { buildLathe, buildSectionFaces, DEFAULT_LATHE_SEGMENTS } from "../latheMesh";
 
 export interface FontGeometries {
-  profile: FontProfile;
   bowl: BufferGeometry;
   foot: BufferGeometry;
   pedestal: BufferGeometry;
@@ -14,32 +13,37 @@ export interface FontGeometries {
   cuts: { bowl: BufferGeometry; foot: BufferGeometry; pedestal: BufferGeometry; water: BufferGeometry } | null;
 }
 
-/** The meshes for one form, rebuilt when the form or the view changes and disposed afterwards. */
-export function useFontGeometries(
-  params: FontParameters,
+/** The meshes for one profile, built from it (never from the parameters again) and disposed afterwards. */
+export function buildFontGeometries(
+  profile: FontProfile,
   section: boolean,
   segments = DEFAULT_LATHE_SEGMENTS,
   withCuts = true,
 ): FontGeometries {
-  const geos = useMemo(() => {
-    const profile = fontProfile(params);
-    const lathe = (pts: typeof profile.bowl.points) => buildLathe(pts, segments, section);
-    return {
-      profile,
-      bowl: lathe(profile.bowl.points),
-      foot: lathe(profile.foot.points),
-      pedestal: lathe(profile.pedestal.points),
-      cuts: section && withCuts
-        ? {
-            bowl: buildSectionFaces(profile.bowl.points),
-            foot: buildSectionFaces(profile.foot.points),
-            pedestal: buildSectionFaces(profile.pedestal.points),
-            water: buildSectionFaces(profile.water.points),
-          }
-        : null,
-    };
-  }, [params, section, segments, withCuts]);
+  const lathe = (pts: typeof profile.bowl.points) => buildLathe(pts, segments, section);
+  const cuts =
+    section && withCuts
+      ? {
+          bowl: buildSectionFaces(profile.bowl.points),
+          foot: buildSectionFaces(profile.foot.points),
+          pedestal: buildSectionFaces(profile.pedestal.points),
+          water: buildSectionFaces(profile.water.points),
+        }
+      : null;
+  return { bowl: lathe(profile.bowl.points), foot: lathe(profile.foot.points), pedestal: lathe(profile.pedestal.points), cuts };
+}
 
+/** The meshes for one form, rebuilt when its profile or the view changes and disposed afterwards. */
+export function useFontGeometries(
+  profile: FontProfile,
+  section: boolean,
+  segments = DEFAULT_LATHE_SEGMENTS,
+  withCuts = true,
+): FontGeometries {
+  const geos = useMemo(
+    () => buildFontGeometries(profile, section, segments, withCuts),
+    [profile, section, segments, withCuts],
+  );
   useEffect(
     () => () => {
       for (const g of [geos.bowl, geos.foot, geos.pedestal]) g.dispose();
