@@ -30,10 +30,10 @@ export const DEMO_RULES = {
 /** A second commission of the same studio, with its own committee: nobody on one sees the other. */
 export const OTHER_COMMISSION = {
   title: "Font and cover for the new chapel",
-  clientBody: "Lantern Hill Chapel — Trustees",
-  site: "Lantern Hill Chapel, Brackenmoor",
+  clientBody: "Thrennick Chapel — Trustees",
+  site: "Thrennick Chapel, Vellanshaw",
 };
 export const OTHER_COMMITTEE = [
-  { email: "owen@lanternhill.test", name: "Owen Tregarthen", role: "chair" as const, treasurer: false },
-  { email: "hazel@lanternhill.test", name: "Hazel Pryor", role: "member" as const, treasurer: false },
+  { email: "owen@thrennick.test", name: "Owen Tregarthen", role: "chair" as const, treasurer: false },
+  { email: "hazel@thrennick.test", name: "Hazel Pryor", role: "member" as const, treasurer: false },
 ];

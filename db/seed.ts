@@ -58,7 +58,7 @@ async function seedRevisions(designer: Viewer, commissionId: number) {
     { params: DEMO_REVISION_1, note: "First design after the site visit: a shallow bowl on a low foot, with two engravings facing the door and the altar." },
     {
       params: DEMO_REVISION_2,
-      note: "As the committee asked at its meeting: a deeper bowl (150 mm, about 20 litres to the brim), three engravings spaced evenly for the three persons of the Trinity, and the pedestal raised by 30 mm so the rim sits at a comfortable height for the priest.",
+      note: "As the committee asked at its meeting: a deeper bowl (150 mm, about 20 litres to the brim), three engravings spaced evenly, one for each of the three villages the parish serves, and the pedestal raised by 30 mm so the rim sits at a comfortable height for the priest.",
     },
   ];
   for (const step of steps) {

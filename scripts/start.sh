@@ -49,7 +49,7 @@ cat <<MSG
     ruth@stwenna.test         committee member
     colin@stwenna.test        committee member, treasurer
     priya@stwenna.test        adviser (comments, no vote)
-    owen@lanternhill.test     chair of another commission (sees only his own)
+    owen@thrennick.test     chair of another commission (sees only his own)
 
   npm run db:seed resets the demo. Ctrl-C stops everything.
 MSG

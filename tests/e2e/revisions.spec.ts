@@ -22,7 +22,7 @@ async function circulateDraft(page: Page, n: number) {
 test("the designer drafts, uploads with progress and circulates; a member opens the mail link and reads it; compare shows what changed", async ({ page, browser, baseURL }) => {
   test.setTimeout(150_000);
   await signInAs(page, await makePerson("designer"));
-  const { title, commissionId } = await newCommissionViaForm(page, "Font for the chapel of rest", "Harrowden Parish — Fabric Committee", "Harrowden church, the chapel of rest");
+  const { title, commissionId } = await newCommissionViaForm(page, "Font for the chapel of rest", "Wickerdine Parish — Fabric Committee", "Wickerdine church, the chapel of rest");
   const member = await makePerson("member", { commissionTitle: title });
 
   // Revision 1: the model, a note, a drawing (with its progress bar), then circulate.

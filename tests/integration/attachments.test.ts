@@ -228,7 +228,7 @@ describe("who may see and change files", () => {
   });
 
   it("a member of another commission gets not found, even once circulated; unknown ids too", async () => {
-    const owen = await viewer("owen@lanternhill.test");
+    const owen = await viewer("owen@thrennick.test");
     const [first] = await listAttachments(elias, draft.id);
     await expect(readAttachment(owen, first.id, "file")).rejects.toBeInstanceOf(NotFoundError);
     await expect(readAttachment(elias, 987654, "file")).rejects.toBeInstanceOf(NotFoundError);
@@ -256,6 +256,6 @@ describe("a circulated revision is frozen", () => {
     const ruth = await viewer("ruth@stwenna.test");
     expect((await readAttachment(ruth, first.id, "file")).bytes.byteLength).toBe(first.sizeBytes);
     await expect(addAttachment(ruth, draft.id, { name: "x.png", bytes: await f.png(16, 16) })).rejects.toBeInstanceOf(ForbiddenError);
-    await expect(readAttachment(await viewer("hazel@lanternhill.test"), first.id, "file")).rejects.toBeInstanceOf(NotFoundError);
+    await expect(readAttachment(await viewer("hazel@thrennick.test"), first.id, "file")).rejects.toBeInstanceOf(NotFoundError);
   });
 });

@@ -9,7 +9,7 @@ export const PEOPLE = {
   chair: "margaret@stwenna.test",
   member: "david@stwenna.test",
   adviser: "priya@stwenna.test",
-  outsider: "owen@lanternhill.test",
+  outsider: "owen@thrennick.test",
 } as const;
 export type Who = keyof typeof PEOPLE;
 export const ROLES = Object.keys(PEOPLE) as Who[];

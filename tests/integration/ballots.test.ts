@@ -83,7 +83,7 @@ describe("an electronic ballot", () => {
       expect(s.rulesText.join(" ")).toContain("Standing order 9(c)");
     }
     await expect(getBallotState(await as("outsider"), rev.id)).rejects.toBeInstanceOf(NotFoundError);
-    await expect(getBallotState(await viewer("hazel@lanternhill.test"), 999_999)).rejects.toBeInstanceOf(NotFoundError);
+    await expect(getBallotState(await viewer("hazel@thrennick.test"), 999_999)).rejects.toBeInstanceOf(NotFoundError);
   });
 
   it("only the chair closes it; the result is frozen and votes are refused afterwards", async () => {

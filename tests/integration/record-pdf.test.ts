@@ -81,7 +81,7 @@ describe("the decision record", () => {
   });
 
   it("is not found for an outsider, or for a commission that does not exist", async () => {
-    const hazel = await viewer("hazel@lanternhill.test");
+    const hazel = await viewer("hazel@thrennick.test");
     await expect(decisionRecordFor(hazel, ids.commissionId)).rejects.toBeInstanceOf(NotFoundError);
     await expect(decisionRecordFor(await viewer(PEOPLE.member), 987654)).rejects.toBeInstanceOf(NotFoundError);
     await expect(decisionRecordFor(hazel, ids.otherCommissionId)).resolves.toMatchObject({ commission: { id: ids.otherCommissionId } });
@@ -109,7 +109,7 @@ describe("GET /api/commissions/{id}/record.pdf", () => {
   });
 
   it("answers 404 to an outsider and to an id that is not a number, 401 to nobody, never a 500", async () => {
-    session.viewer = await viewer("hazel@lanternhill.test");
+    session.viewer = await viewer("hazel@thrennick.test");
     const outsider = await get(String(ids.commissionId));
     expect(outsider.status).toBe(404);
     expect(await outsider.json()).toEqual({ error: "Not found." });

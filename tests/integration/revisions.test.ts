@@ -29,7 +29,7 @@ describe("drafting and freezing", () => {
     await expect(getRevisionByNumber(david, ids.commissionId, d.number)).rejects.toBeInstanceOf(NotFoundError);
     expect((await getRevisionByNumber(await designer(), ids.commissionId, d.number)).id).toBe(d.id);
     expect(await listRevisions(david, ids.commissionId)).toEqual([]);
-    const hazel = await viewer("hazel@lanternhill.test");
+    const hazel = await viewer("hazel@thrennick.test");
     await expect(getRevision(hazel, d.id)).rejects.toBeInstanceOf(NotFoundError);
     await expect(createDraft(await designer(), ids.commissionId)).rejects.toBeInstanceOf(ConflictError);
   });

@@ -32,14 +32,14 @@ describe("migrations", () => {
 
 describe("who sees what", () => {
   it("a member of one commission cannot read another's", async () => {
-    const hazel = await viewer("hazel@lanternhill.test");
+    const hazel = await viewer("hazel@thrennick.test");
     await expect(getCommission(hazel, ids.commissionId)).rejects.toBeInstanceOf(NotFoundError);
     const list = await listCommissions(hazel);
     expect(list.map((c) => c.id)).toEqual([ids.otherCommissionId]);
   });
 
   it("a commission that does not exist looks the same as one you may not see", async () => {
-    const hazel = await viewer("hazel@lanternhill.test");
+    const hazel = await viewer("hazel@thrennick.test");
     const a = await getCommission(hazel, 987654).catch((e) => e);
     const b = await getCommission(hazel, ids.commissionId).catch((e) => e);
     expect(a).toBeInstanceOf(NotFoundError);
@@ -79,7 +79,7 @@ describe("invitations", () => {
     await expect(invitePerson(chair, ids.commissionId, { email: "m@example.test", name: "M", role: "member" })).rejects.toBeInstanceOf(ForbiddenError);
     const david = await viewer("david@stwenna.test");
     await expect(invitePerson(david, ids.commissionId, { email: "x@example.test", name: "X", role: "adviser" })).rejects.toBeInstanceOf(ForbiddenError);
-    const owen = await viewer("owen@lanternhill.test");
+    const owen = await viewer("owen@thrennick.test");
     await expect(invitePerson(owen, ids.commissionId, { email: "y@example.test", name: "Y", role: "adviser" })).rejects.toBeInstanceOf(NotFoundError);
   });
 

@@ -65,7 +65,7 @@ describe("the exported record", () => {
     const rec = await exportRecord(david, ids.commissionId);
     expect(rec.events.length).toBeGreaterThan(5);
     expect(verifyRecord(JSON.parse(JSON.stringify(rec))).ok).toBe(true);
-    const hazel = await viewer("hazel@lanternhill.test");
+    const hazel = await viewer("hazel@thrennick.test");
     await expect(exportRecord(hazel, ids.commissionId)).rejects.toBeInstanceOf(NotFoundError);
   });
 });

@@ -3,7 +3,7 @@ import { decisionRefusal, parseDecision, splitConditions, stageAfterDecision } f
 
 describe("the decision's input", () => {
   it("splits conditions one per line, dropping blank lines", () => {
-    expect(splitConditions("  Lower the rim by 5 mm \r\n\n Engrave three crosses\n")).toEqual(["Lower the rim by 5 mm", "Engrave three crosses"]);
+    expect(splitConditions("  Lower the rim by 5 mm \r\n\n Cut the wren badge into the foot\n")).toEqual(["Lower the rim by 5 mm", "Cut the wren badge into the foot"]);
     expect(splitConditions(["a", " b "])).toEqual(["a", "b"]);
     expect(splitConditions(7)).toBeNull();
   });
