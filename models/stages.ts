@@ -12,4 +12,3 @@ export const STAGE_LABELS = {
 } as const;
 export type Stage = keyof typeof STAGE_LABELS;
 
-export const STAGE_ORDER: Stage[] = ["brief", "concept", "design-development", "approved", "in-fabrication", "installed", "handed-over"];

@@ -11,10 +11,6 @@ export const CHOICE_PAST: Record<VoteChoice, string> = { "in-favour": "voted in 
 
 export const BALLOT_OUTCOME_LABELS: Record<BallotOutcome, string> = { carried: "Carried", failed: "Failed", "no-quorum": "No quorum" };
 
-export function isVoteChoice(v: unknown): v is VoteChoice {
-  return typeof v === "string" && (VOTE_CHOICES as readonly string[]).includes(v);
-}
-
 /** What is frozen on a ballot when it closes (electronic) or is recorded (meeting). */
 export interface FrozenResult {
   rules: BallotRules;

@@ -51,7 +51,7 @@ const chair: Rule = (a) => a.committeeRole === "chair";
 const committee: Rule = (a) => a.committeeRole !== null;
 const anyone: Rule = (a) => studio(a) || committee(a);
 
-/** The table of DESIGN §2, one line an action. Ballot.vote is further narrowed by the rules (chair votes?). */
+/** Who may do what, one line an action. Ballot.vote is further narrowed by the rules (chair votes?). */
 const RULES: Record<Action, Rule> = {
   "commission.view": anyone,
   "commission.create": studio,

@@ -8,10 +8,6 @@ export const REVISION_STATE_LABELS: Record<RevisionState, string> = {
   decided: "Decided",
 };
 
-export function isEditable(state: RevisionState): boolean {
-  return state === "draft";
-}
-
 /** Why a revision cannot be changed, in plain words, or null if it can. */
 export function editRefusal(state: RevisionState, number: number): string | null {
   if (state === "draft") return null;
