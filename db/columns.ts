@@ -1,7 +1,10 @@
 import { bigint, customType, datetime } from "drizzle-orm/mysql-core";
 
-/** JSON stored as LONGTEXT and parsed here (MariaDB hands JSON columns back as strings). */
-export const jsonText = <T>(name: string) =>
+/**
+ * JSON stored as LONGTEXT and parsed here (MariaDB hands JSON columns back as strings), typed with the
+ * domain shape it holds, e.g. json<FontParameters>("params"), so readers need no casts.
+ */
+export const json = <T>(name: string) =>
   customType<{ data: T; driverData: string }>({
     dataType: () => "longtext",
     toDriver: (value) => JSON.stringify(value),

@@ -2,7 +2,23 @@ import { sql } from "drizzle-orm";
 import {
   boolean, index, int, mysqlEnum, mysqlTable, primaryKey, text, timestamp, uniqueIndex, varchar,
 } from "drizzle-orm/mysql-core";
-import { id, ref, utc, jsonText } from "./columns";
+import { id, ref, utc, json } from "./columns";
+// The value lists are the domain's own (models/); storage only uses them.
+import { BALLOT_KINDS, BALLOT_STATUSES } from "../models/ballot/kinds";
+import { THRESHOLDS } from "../models/ballot/rules";
+import { VOTE_CHOICES, type FrozenResult } from "../models/ballot/state";
+import type { CommentTarget } from "../models/comments/schema";
+import { DECISION_OUTCOMES } from "../models/decision";
+import type { StudioSettings } from "../models/font/studio";
+import { LENGTH_UNITS } from "../models/font/units";
+import { NOTICE_CHOICES } from "../models/notices";
+import { COMMITTEE_ROLES, STUDIO_ROLES } from "../models/permissions/roles";
+import { ATTACHMENT_KINDS } from "../models/revision/attachment-kinds";
+import { REVISION_STATES } from "../models/revision/state";
+import { STAGES } from "../models/stages";
+
+/** Kept importable from here for storage code that already reads them here. */
+export { ATTACHMENT_KINDS, COMMITTEE_ROLES, DECISION_OUTCOMES, REVISION_STATES, STAGES, STUDIO_ROLES, THRESHOLDS, VOTE_CHOICES };
 
 const now = () => utc("created_at").notNull().default(sql`CURRENT_TIMESTAMP(3)`);
 
@@ -13,8 +29,8 @@ export const users = mysqlTable("users", {
   email: varchar("email", { length: 255 }).notNull().unique(),
   emailVerified: timestamp("emailVerified", { mode: "date", fsp: 3 }),
   image: varchar("image", { length: 255 }),
-  units: mysqlEnum("units", ["mm", "in"]).notNull().default("mm"),
-  notices: mysqlEnum("notices", ["immediate", "digest"]).notNull().default("immediate"),
+  units: mysqlEnum("units", LENGTH_UNITS).notNull().default("mm"),
+  notices: mysqlEnum("notices", NOTICE_CHOICES).notNull().default("immediate"),
   createdAt: now(),
 });
 
@@ -46,14 +62,12 @@ export const verificationTokens = mysqlTable("verification_tokens", {
 }, (t) => [primaryKey({ columns: [t.identifier, t.token] })]);
 
 // --- Studios ------------------------------------------------------------------------------------
-export const STUDIO_ROLES = ["owner", "designer"] as const;
-
 export const studios = mysqlTable("studios", {
   id: id(),
   name: varchar("name", { length: 200 }).notNull(),
   town: varchar("town", { length: 200 }).notNull().default(""),
   /** Machines, abrasive sets and default stock (models/font studioSettingsSchema). */
-  settings: jsonText<unknown>("settings").notNull(),
+  settings: json<StudioSettings>("settings").notNull(),
   createdAt: now(),
 });
 
@@ -66,13 +80,6 @@ export const studioMembers = mysqlTable("studio_members", {
 }, (t) => [uniqueIndex("studio_members_studio_user").on(t.studioId, t.userId)]);
 
 // --- Commissions --------------------------------------------------------------------------------
-export const STAGES = [
-  "brief", "concept", "design-development", "approved", "in-fabrication", "installed", "handed-over",
-  "on-hold", "withdrawn",
-] as const;
-export const COMMITTEE_ROLES = ["chair", "member", "adviser"] as const;
-export const THRESHOLDS = ["majority", "two-thirds", "unanimous"] as const;
-
 export const commissions = mysqlTable("commissions", {
   id: id(),
   studioId: ref("studio_id").notNull().references(() => studios.id),
@@ -113,7 +120,7 @@ export const trailEvents = mysqlTable("trail_events", {
   action: varchar("action", { length: 60 }).notNull(),
   subjectType: varchar("subject_type", { length: 40 }).notNull(),
   subjectId: varchar("subject_id", { length: 64 }).notNull(),
-  payload: jsonText<Record<string, unknown>>("payload").notNull(),
+  payload: json<Record<string, unknown>>("payload").notNull(),
   prevHash: varchar("prev_hash", { length: 64 }).notNull(),
   hash: varchar("hash", { length: 64 }).notNull(),
 }, (t) => [uniqueIndex("trail_events_commission_seq").on(t.commissionId, t.seq)]);
@@ -125,7 +132,7 @@ export const securityLog = mysqlTable("security_log", {
   email: varchar("email", { length: 255 }),
   at: utc("at").notNull().default(sql`CURRENT_TIMESTAMP(3)`),
   action: varchar("action", { length: 60 }).notNull(),
-  detail: jsonText<Record<string, unknown>>("detail").notNull(),
+  detail: json<Record<string, unknown>>("detail").notNull(),
 }, (t) => [index("security_log_user").on(t.userId)]);
 
 // --- Outbox: mail written in the same transaction as the change, sent by a worker with retries -----
@@ -145,18 +152,19 @@ export const outbox = mysqlTable("outbox", {
 }, (t) => [uniqueIndex("outbox_dedupe").on(t.dedupeKey), index("outbox_due").on(t.status, t.nextAttemptAt)]);
 
 // --- Revisions and their attachments ---------------------------------------------------------------
-export const REVISION_STATES = ["draft", "circulated", "superseded", "decided"] as const;
-
 export const revisions = mysqlTable("revisions", {
   id: id(),
   commissionId: ref("commission_id").notNull().references(() => commissions.id),
   /** Revision 1, 2, 3 … within the commission. */
   number: int("number", { unsigned: true }).notNull(),
   state: mysqlEnum("state", REVISION_STATES).notNull().default("draft"),
-  /** Font parameters (models/font fontParametersSchema). */
-  params: jsonText<Record<string, unknown>>("params").notNull(),
+  /**
+   * Font parameters (models/font fontParametersSchema). Still loosely typed: the writer merges partial
+   * input into it; json<FontParameters> once that code stops casting to a plain record.
+   */
+  params: json<Record<string, unknown>>("params").notNull(),
   /** Computed figures, frozen at circulation (null while a draft: computed on read). */
-  figures: jsonText<Record<string, unknown> | null>("figures"),
+  figures: json<Record<string, unknown> | null>("figures"),
   note: text("note").notNull(),
   /** SHA-256 over RFC 8785 canonical JSON of the frozen content; set when circulated. */
   contentHash: varchar("content_hash", { length: 64 }),
@@ -167,8 +175,6 @@ export const revisions = mysqlTable("revisions", {
   createdAt: now(),
   updatedAt: utc("updated_at").notNull().default(sql`CURRENT_TIMESTAMP(3)`),
 }, (t) => [uniqueIndex("revisions_commission_number").on(t.commissionId, t.number)]);
-
-export const ATTACHMENT_KINDS = ["png", "jpeg", "webp", "pdf"] as const;
 
 export const attachments = mysqlTable("attachments", {
   id: id(),
@@ -204,7 +210,7 @@ export const comments = mysqlTable("comments", {
    * Where it is pinned: { kind: "revision" } | { kind: "attachment", attachmentId, selector: "xywh=percent:x,y,w,h" }
    * | { kind: "model", part, point: [x, y, z] } (model millimetres).
    */
-  target: jsonText<Record<string, unknown>>("target").notNull(),
+  target: json<CommentTarget>("target").notNull(),
   resolvedAt: utc("resolved_at"),
   resolvedBy: varchar("resolved_by", { length: 255 }).references(() => users.id),
   editedAt: utc("edited_at"),
@@ -215,8 +221,8 @@ export const ballots = mysqlTable("ballots", {
   id: id(),
   revisionId: ref("revision_id").notNull().references(() => revisions.id),
   commissionId: ref("commission_id").notNull().references(() => commissions.id),
-  kind: mysqlEnum("kind", ["electronic", "meeting"]).notNull(),
-  status: mysqlEnum("status", ["open", "closed", "withdrawn"]).notNull(),
+  kind: mysqlEnum("kind", BALLOT_KINDS).notNull(),
+  status: mysqlEnum("status", BALLOT_STATUSES).notNull(),
   /** The motion, in words ("That Revision 2 be approved"). */
   motion: varchar("motion", { length: 500 }).notNull(),
   openedBy: varchar("opened_by", { length: 255 }).notNull().references(() => users.id),
@@ -225,10 +231,8 @@ export const ballots = mysqlTable("ballots", {
   closedAt: utc("closed_at"),
   meetingDate: varchar("meeting_date", { length: 10 }),
   /** Frozen when closed: rules, voting members, counts and decideBallot's result. */
-  result: jsonText<Record<string, unknown> | null>("result"),
+  result: json<FrozenResult | null>("result"),
 }, (t) => [index("ballots_revision").on(t.revisionId)]);
-
-export const VOTE_CHOICES = ["in-favour", "against", "abstain"] as const;
 
 export const votes = mysqlTable("votes", {
   id: id(),
@@ -238,15 +242,13 @@ export const votes = mysqlTable("votes", {
   castAt: utc("cast_at").notNull(),
 }, (t) => [uniqueIndex("votes_ballot_user").on(t.ballotId, t.userId)]);
 
-export const DECISION_OUTCOMES = ["approved", "approved-as-noted", "revise-and-resubmit", "not-approved"] as const;
-
 export const decisions = mysqlTable("decisions", {
   id: id(),
   /** Exactly one decision per revision. */
   revisionId: ref("revision_id").notNull().references(() => revisions.id),
   commissionId: ref("commission_id").notNull().references(() => commissions.id),
   outcome: mysqlEnum("outcome", DECISION_OUTCOMES).notNull(),
-  conditions: jsonText<string[]>("conditions").notNull(),
+  conditions: json<string[]>("conditions").notNull(),
   statement: text("statement").notNull(),
   ballotId: ref("ballot_id").references(() => ballots.id),
   contentHash: varchar("content_hash", { length: 64 }).notNull(),

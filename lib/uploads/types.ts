@@ -1,5 +1,7 @@
+import type { AttachmentKind } from "@/models/revision/attachment-kinds";
+
 /** The kinds of file a revision may carry. */
-export type UploadKind = "png" | "jpeg" | "webp" | "pdf";
+export type UploadKind = AttachmentKind;
 
 export const MIME: Record<UploadKind, string> = {
   png: "image/png",

@@ -8,7 +8,8 @@
  * Each is checked against mathjs in the unit tests.
  */
 
-export type LengthUnit = "mm" | "in";
+export const LENGTH_UNITS = ["mm", "in"] as const;
+export type LengthUnit = (typeof LENGTH_UNITS)[number];
 
 export const MM_PER_INCH = 25.4;
 export const KG_PER_POUND = 0.45359237;

@@ -2,8 +2,9 @@
  * Who may do what on a commission. Pure: the data-access layer looks up the actor's roles and asks here.
  * Roles: studio side (owner, designer) and client side (chair, member, adviser; treasurer is a flag).
  */
-export type StudioRole = "owner" | "designer";
-export type CommitteeRole = "chair" | "member" | "adviser";
+import type { CommitteeRole, StudioRole } from "./roles";
+
+export { COMMITTEE_ROLES, STUDIO_ROLES, type CommitteeRole, type StudioRole } from "./roles";
 
 export interface Actor {
   /** Role in the studio that owns the commission, if any. */

@@ -1,2 +1,3 @@
 export * from "./content";
 export * from "./state";
+export * from "./attachment-kinds";

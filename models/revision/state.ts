@@ -1,5 +1,6 @@
 /** The revision's life: draft → circulated → (superseded | decided). Only a draft changes. */
-export type RevisionState = "draft" | "circulated" | "superseded" | "decided";
+export const REVISION_STATES = ["draft", "circulated", "superseded", "decided"] as const;
+export type RevisionState = (typeof REVISION_STATES)[number];
 
 export const REVISION_STATE_LABELS: Record<RevisionState, string> = {
   draft: "Draft (studio only)",
