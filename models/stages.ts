@@ -1,7 +1,14 @@
 /** Every stage, in the order a commission passes through them, then the two it can be set aside in. */
 export const STAGES = [
-  "brief", "concept", "design-development", "approved", "in-fabrication", "installed", "handed-over",
-  "on-hold", "withdrawn",
+  "brief",
+  "concept",
+  "design-development",
+  "approved",
+  "in-fabrication",
+  "installed",
+  "handed-over",
+  "on-hold",
+  "withdrawn",
 ] as const;
 export type Stage = (typeof STAGES)[number];
 
@@ -17,4 +24,3 @@ export const STAGE_LABELS: Record<Stage, string> = {
   "on-hold": "On hold",
   withdrawn: "Withdrawn",
 };
-

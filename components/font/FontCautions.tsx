@@ -2,7 +2,7 @@
 export function FontCautions({ className = "" }: { className?: string }) {
   return (
     <aside
-      className={`rounded-lg border border-record bg-record-soft p-4 font-sans text-sm text-ink ${className}`}
+      className={`border-record bg-record-soft text-ink rounded-lg border p-4 font-sans text-sm ${className}`}
       aria-label="Cautions about these figures"
       data-testid="font-cautions"
     >

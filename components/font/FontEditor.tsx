@@ -60,7 +60,7 @@ function StatusLine({ errorCount, figures, unit }: { errorCount: number; figures
   return (
     <p className="text-sm" role="status" data-testid="font-status">
       {errorCount > 0 ? (
-        <span className="font-medium text-danger">
+        <span className="text-danger font-medium">
           {errorCount === 1 ? "One value needs" : `${errorCount} values need`} attention. The picture and figures show
           the last form that worked.
         </span>
@@ -84,7 +84,7 @@ interface FieldGroupsProps {
 
 function FieldGroups({ idPrefix, draft, errors, readOnly, update }: FieldGroupsProps) {
   return groups.map((g) => (
-    <fieldset key={g.key} className="mb-4 rounded-lg border border-line bg-card px-4 pt-3">
+    <fieldset key={g.key} className="border-line bg-card mb-4 rounded-lg border px-4 pt-3">
       <legend className="px-1 font-serif text-lg font-semibold">{g.title}</legend>
       {fontFields
         .filter((f) => f.group === g.key)
@@ -104,7 +104,17 @@ function FieldGroups({ idPrefix, draft, errors, readOnly, update }: FieldGroupsP
   ));
 }
 
-function FiguresSection({ idPrefix, figures, unit, stale }: { idPrefix: string; figures: Figures; unit: LengthUnit; stale: boolean }) {
+function FiguresSection({
+  idPrefix,
+  figures,
+  unit,
+  stale,
+}: {
+  idPrefix: string;
+  figures: Figures;
+  unit: LengthUnit;
+  stale: boolean;
+}) {
   return (
     <section aria-labelledby={`${idPrefix}-figures`}>
       <h2 id={`${idPrefix}-figures`} className="mb-3 font-serif text-xl font-semibold">
@@ -161,7 +171,11 @@ export function FontEditor({
       {/* On a phone the picture comes first, so a change can be seen as it is made. */}
       <div className="grid min-w-0 content-start gap-3 lg:col-start-2 lg:row-start-1">
         {viewerModel && <FontViewer model={viewerModel} ghost={ghost} units={unit} />}
-        <StatusLine errorCount={Object.keys(errors).length + formErrors.length} figures={lastValid?.figures ?? null} unit={unit} />
+        <StatusLine
+          errorCount={Object.keys(errors).length + formErrors.length}
+          figures={lastValid?.figures ?? null}
+          unit={unit}
+        />
       </div>
       <form
         className="min-w-0 lg:col-start-1 lg:row-span-2 lg:row-start-1"
@@ -171,11 +185,13 @@ export function FontEditor({
       >
         <UnitChoice name={`${idPrefix}-unit`} unit={unit} onChange={(u) => update((d) => switchUnit(d, u))} />
         <FieldGroups idPrefix={idPrefix} draft={draft} errors={errors} readOnly={readOnly} update={update} />
-        {formErrors.length > 0 && <p className="text-sm font-medium text-danger">{formErrors.join(" ")}</p>}
+        {formErrors.length > 0 && <p className="text-danger text-sm font-medium">{formErrors.join(" ")}</p>}
         {inputName && <input type="hidden" name={inputName} value={JSON.stringify(shownParams)} />}
       </form>
       <div className="grid min-w-0 content-start gap-5 lg:col-start-2 lg:row-start-2">
-        {lastValid && <FiguresSection idPrefix={idPrefix} figures={lastValid.figures} unit={unit} stale={!evaluation.ok} />}
+        {lastValid && (
+          <FiguresSection idPrefix={idPrefix} figures={lastValid.figures} unit={unit} stale={!evaluation.ok} />
+        )}
         <PlanSection {...{ idPrefix, plan, unit, studioSettings, choice }} onChoose={setChoice} />
       </div>
     </div>

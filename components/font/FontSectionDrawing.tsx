@@ -24,12 +24,29 @@ export function FontSectionDrawing({ profile: prof, className = "" }: { profile:
       role="img"
       aria-label="Cross-section of the font"
     >
-      <line x1={-halfWidth} x2={halfWidth} y1={0} y2={0} stroke="currentColor" strokeWidth={halfWidth / 200} opacity={0.5} />
+      <line
+        x1={-halfWidth}
+        x2={halfWidth}
+        y1={0}
+        y2={0}
+        stroke="currentColor"
+        strokeWidth={halfWidth / 200}
+        opacity={0.5}
+      />
       <path d={path(prof.pedestal.points)} fill="#8b5e3c" opacity={0.85} />
       <path d={path(prof.water.points)} fill="#4f86b5" opacity={0.35} />
       <path d={path(prof.foot.points)} fill="#b9d6cf" stroke="#5d7f78" strokeWidth={halfWidth / 300} />
       <path d={path(prof.bowl.points)} fill="#b9d6cf" stroke="#5d7f78" strokeWidth={halfWidth / 300} />
-      <line x1={0} x2={0} y1={0} y2={-height} stroke="currentColor" strokeDasharray={`${halfWidth / 40} ${halfWidth / 60}`} strokeWidth={halfWidth / 400} opacity={0.4} />
+      <line
+        x1={0}
+        x2={0}
+        y1={0}
+        y2={-height}
+        stroke="currentColor"
+        strokeDasharray={`${halfWidth / 40} ${halfWidth / 60}`}
+        strokeWidth={halfWidth / 400}
+        opacity={0.4}
+      />
     </svg>
   );
 }

@@ -39,7 +39,6 @@ export function Gallery({ attachments, editable = false, onChanged, renderOverla
         <figure className="overflow-hidden rounded-lg border border-line bg-card" data-testid="gallery-lead">
           <div className="relative">
             <button type="button" onClick={() => openImage(lead)} className="block w-full cursor-zoom-in" aria-label={`Open ${lead.caption || lead.name} full screen`}>
-              {/* eslint-disable-next-line @next/next/no-img-element */}
               <img src={lead.url} alt={lead.caption || lead.name} width={lead.width ?? undefined} height={lead.height ?? undefined} className="block h-auto w-full" />
             </button>
             {renderOverlay && <div className={overlayBox}>{renderOverlay(lead)}</div>}
@@ -62,7 +61,6 @@ export function Gallery({ attachments, editable = false, onChanged, renderOverla
                 </div>
               ) : (
                 <button type="button" onClick={() => openImage(a)} className="block cursor-zoom-in bg-paper-deep" aria-label={`Open ${a.caption || a.name} full screen`}>
-                  {/* eslint-disable-next-line @next/next/no-img-element */}
                   <img src={a.thumbUrl ?? a.url} alt={a.caption || a.name} loading="lazy" className="block aspect-[4/3] w-full object-contain" />
                 </button>
               )}

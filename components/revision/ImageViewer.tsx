@@ -88,7 +88,6 @@ export function ImageViewer({ images, index, onIndex, onClose, renderOverlay, on
         style={{ cursor: onImageClick ? "crosshair" : s > 1 ? "grab" : "default" }}>
         <div ref={zp.contentRef} className="relative shrink-0"
           style={{ transform: `translate(${x}px, ${y}px) scale(${s})`, transformOrigin: "0 0", "--viewer-scale": s } as CSSProperties}>
-          {/* eslint-disable-next-line @next/next/no-img-element */}
           <img ref={img} src={a.url} alt={label} draggable={false} className="block max-w-none"
             style={box ? { width: box.w, height: box.h } : { maxWidth: "100%", maxHeight: "70dvh" }} />
           {renderOverlay && (

@@ -23,7 +23,6 @@ export type ModelTarget = Extract<CommentTarget, { kind: "model" }>;
  * dropped, and the ends are trimmed. Nothing is stripped or escaped; it is never shown as HTML.
  */
 export function normaliseText(s: string): string {
-  // eslint-disable-next-line no-control-regex
   return s.replace(/\r\n?/g, "\n").replace(/[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F]/g, "").trim();
 }
 

@@ -9,8 +9,7 @@ import { fontParametersSchema } from "./schema";
 import type { FontFieldErrors, FontParameters } from "./types";
 
 export type FontParseResult =
-  | { ok: true; params: FontParameters }
-  | { ok: false; fieldErrors: FontFieldErrors; formErrors: string[] };
+  { ok: true; params: FontParameters } | { ok: false; fieldErrors: FontFieldErrors; formErrors: string[] };
 
 export function parseFontParameters(input: unknown): FontParseResult {
   const r = fontParametersSchema.safeParse(input);
@@ -39,8 +38,7 @@ export function modelFont(params: FontParameters, figures?: FontFigures | null):
 }
 
 export type FontEvaluation =
-  | ({ ok: true } & FontModel)
-  | { ok: false; fieldErrors: FontFieldErrors; formErrors: string[] };
+  ({ ok: true } & FontModel) | { ok: false; fieldErrors: FontFieldErrors; formErrors: string[] };
 
 export function evaluateFont(input: unknown): FontEvaluation {
   const r = parseFontParameters(input);

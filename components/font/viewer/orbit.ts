@@ -27,7 +27,11 @@ export function zoomBy(o: Orbit, factor: number): Orbit {
 }
 
 /** Camera position (scene coordinates, Y up) for an orbit about a target at the given distance. */
-export function cameraPosition(o: Orbit, target: [number, number, number], fitDistance: number): [number, number, number] {
+export function cameraPosition(
+  o: Orbit,
+  target: [number, number, number],
+  fitDistance: number,
+): [number, number, number] {
   const d = fitDistance / o.zoom;
   const az = (o.azimuthDeg * Math.PI) / 180;
   const el = (o.elevationDeg * Math.PI) / 180;

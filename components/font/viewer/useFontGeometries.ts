@@ -30,7 +30,12 @@ export function buildFontGeometries(
           water: buildSectionFaces(profile.water.points),
         }
       : null;
-  return { bowl: lathe(profile.bowl.points), foot: lathe(profile.foot.points), pedestal: lathe(profile.pedestal.points), cuts };
+  return {
+    bowl: lathe(profile.bowl.points),
+    foot: lathe(profile.foot.points),
+    pedestal: lathe(profile.pedestal.points),
+    cuts,
+  };
 }
 
 /** The meshes for one form, rebuilt when its profile or the view changes and disposed afterwards. */

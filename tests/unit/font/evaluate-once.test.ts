@@ -12,21 +12,31 @@ import { createRoot, type Root } from "react-dom/client";
 const calls = vi.hoisted(() => ({ profile: 0, geometry: 0, figures: 0 }));
 vi.mock("@/models/font/profile", async (load) => {
   const real = await load<typeof import("@/models/font/profile")>();
-  return { ...real, fontProfile: (...a: Parameters<typeof real.fontProfile>) => (calls.profile++, real.fontProfile(...a)) };
+  return {
+    ...real,
+    fontProfile: (...a: Parameters<typeof real.fontProfile>) => (calls.profile++, real.fontProfile(...a)),
+  };
 });
 vi.mock("@/models/font/geometry", async (load) => {
   const real = await load<typeof import("@/models/font/geometry")>();
-  return { ...real, fontGeometry: (...a: Parameters<typeof real.fontGeometry>) => (calls.geometry++, real.fontGeometry(...a)) };
+  return {
+    ...real,
+    fontGeometry: (...a: Parameters<typeof real.fontGeometry>) => (calls.geometry++, real.fontGeometry(...a)),
+  };
 });
 vi.mock("@/models/font/figures", async (load) => {
   const real = await load<typeof import("@/models/font/figures")>();
   return {
     ...real,
-    computeFontFigures: (...a: Parameters<typeof real.computeFontFigures>) => (calls.figures++, real.computeFontFigures(...a)),
+    computeFontFigures: (...a: Parameters<typeof real.computeFontFigures>) => (
+      calls.figures++,
+      real.computeFontFigures(...a)
+    ),
   };
 });
 
-const { defaultFontParameters, demoStudioSettings, evaluateFont, modelFont, planColdWorking } = await import("@/models/font");
+const { defaultFontParameters, demoStudioSettings, evaluateFont, modelFont, planColdWorking } =
+  await import("@/models/font");
 const { FontEditor } = await import("@/components/font/FontEditor");
 const { FontViewer } = await import("@/components/font/FontViewer");
 const { frameForms } = await import("@/components/font/FontViewerCanvas");
@@ -91,7 +101,9 @@ describe("the editor works the font out once per change", () => {
 
   it("changing the machine makes a new plan from the same profile", () => {
     mount(createElement(FontEditor, { studioSettings: demoStudioSettings }));
-    const select = [...host.querySelectorAll("select")].find((s) => s.closest("label")?.textContent?.startsWith("Machine"));
+    const select = [...host.querySelectorAll("select")].find((s) =>
+      s.closest("label")?.textContent?.startsWith("Machine"),
+    );
     expect(select).toBeDefined();
     reset();
     act(() => {
