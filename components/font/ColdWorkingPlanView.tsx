@@ -20,7 +20,7 @@ type Part = { plan: ColdWorkingPlan; units: LengthUnit };
 function HeaderRow({ titles }: { titles: string[] }) {
   return (
     <thead>
-      <tr className="border-line text-ink-soft border-b">
+      <tr className="border-b border-line text-ink-soft">
         {titles.map((t, i) => (
           <th key={t} scope="col" className={`py-2 font-medium ${i < titles.length - 1 ? "pr-3" : ""}`}>
             {t}
@@ -34,7 +34,7 @@ function HeaderRow({ titles }: { titles: string[] }) {
 function Problems({ plan, className }: { plan: Extract<ColdWorkingResult, { ok: false }>; className: string }) {
   return (
     <div
-      className={`border-danger bg-danger-soft text-danger rounded-lg border p-4 text-sm ${className}`}
+      className={`rounded-lg border border-danger bg-danger-soft p-4 text-sm text-danger ${className}`}
       role="status"
     >
       <p className="font-semibold">The cold-working plan cannot be made yet:</p>
@@ -56,15 +56,15 @@ function SurfacesTable({ plan, units }: Part) {
         <HeaderRow titles={["Surface", "Area", "Stock to remove", "Handwheel turns"]} />
         <tbody>
           {plan.surfaces.map((s) => (
-            <tr key={s.surface} className="border-line border-b last:border-b-0">
-              <th scope="row" className="text-ink py-2 pr-3 font-medium">
+            <tr key={s.surface} className="border-b border-line last:border-b-0">
+              <th scope="row" className="py-2 pr-3 font-medium text-ink">
                 {s.label}
               </th>
               <td className="py-2 pr-3 whitespace-nowrap tabular-nums">{formatArea(s.areaCm2, units)}</td>
               <td className="py-2 pr-3 tabular-nums">
                 {L(s.stockMm)}
                 {s.formMm > 0 && (
-                  <span className="text-ink-soft block text-xs">
+                  <span className="block text-xs text-ink-soft">
                     {L(s.allowanceMm)} allowance + {L(s.formMm)} ground off to make the flat
                   </span>
                 )}
@@ -99,7 +99,7 @@ function MarkingOut({ plan, units }: Part) {
   if (plan.engravingMarks.length === 0) return <p className="text-ink-soft">No engravings to mark out.</p>;
   return (
     <>
-      <p className="text-ink-soft mb-2">
+      <p className="mb-2 text-ink-soft">
         Measure from the datum mark along the outer edge of the rim (circumference {L(plan.rimCircumferenceMm)}),
         anticlockwise seen from above, then drop down the outside.
       </p>
@@ -108,7 +108,7 @@ function MarkingOut({ plan, units }: Part) {
         <HeaderRow titles={["Mark", "Angle", "Along the rim", "Below the rim"]} />
         <tbody>
           {plan.engravingMarks.map((m) => (
-            <tr key={m.index} className="border-line border-b tabular-nums last:border-b-0">
+            <tr key={m.index} className="border-b border-line tabular-nums last:border-b-0">
               <th scope="row" className="py-2 pr-3 font-medium">
                 {m.index + 1}
               </th>

@@ -2,7 +2,7 @@
 export function FontCautions({ className = "" }: { className?: string }) {
   return (
     <aside
-      className={`border-record bg-record-soft text-ink rounded-lg border p-4 font-sans text-sm ${className}`}
+      className={`rounded-lg border border-record bg-record-soft p-4 font-sans text-sm text-ink ${className}`}
       aria-label="Cautions about these figures"
       data-testid="font-cautions"
     >

@@ -10,24 +10,18 @@ import { useDeferredValue, useId, useMemo, useState } from "react";
 import {
   defaultFontParameters,
   demoStudioSettings,
-  fontFields,
-  formatCapacity,
-  formatMass,
   modelFont,
   planColdWorking,
-  type FontFieldErrors,
-  type FontFigures as Figures,
   type FontModel,
   type FontParameters,
   type LengthUnit,
   type StudioSettings,
 } from "@/models/font";
 import { FontViewer } from "./FontViewer";
-import { FontFigures } from "./FontFigures";
-import { FontFieldInput } from "./editor/FontFieldInput";
+import { FiguresSection, ParametersForm, StatusLine } from "./editor/EditorSections";
 import { PlanSection, type PlanChoice } from "./editor/PlanSection";
 import { UnitChoice } from "./editor/UnitChoice";
-import { editField, switchUnit, type DraftState } from "./editor/draft";
+import { switchUnit } from "./editor/draft";
 import { useFontDraft, useReportChange } from "./editor/useFontDraft";
 
 export interface FontEditorProps {
@@ -46,83 +40,6 @@ export interface FontEditorProps {
   inputName?: string;
   /** an older form drawn faintly in the 3D view */
   ghostParams?: FontParameters | null;
-}
-
-const groups: { key: (typeof fontFields)[number]["group"]; title: string }[] = [
-  { key: "bowl", title: "Bowl" },
-  { key: "foot", title: "Foot" },
-  { key: "pedestal", title: "Pedestal" },
-  { key: "glass", title: "Glass" },
-  { key: "engravings", title: "Engravings" },
-];
-
-function StatusLine({ errorCount, figures, unit }: { errorCount: number; figures: Figures | null; unit: LengthUnit }) {
-  return (
-    <p className="text-sm" role="status" data-testid="font-status">
-      {errorCount > 0 ? (
-        <span className="text-danger font-medium">
-          {errorCount === 1 ? "One value needs" : `${errorCount} values need`} attention. The picture and figures show
-          the last form that worked.
-        </span>
-      ) : figures ? (
-        <span className="text-ink-soft">
-          Holds {formatCapacity(figures.capacityLitres, unit)}; weighs {formatMass(figures.filledMassKg, unit)} when
-          full.
-        </span>
-      ) : null}
-    </p>
-  );
-}
-
-interface FieldGroupsProps {
-  idPrefix: string;
-  draft: DraftState;
-  errors: FontFieldErrors;
-  readOnly: boolean;
-  update: (change: (d: DraftState) => DraftState) => void;
-}
-
-function FieldGroups({ idPrefix, draft, errors, readOnly, update }: FieldGroupsProps) {
-  return groups.map((g) => (
-    <fieldset key={g.key} className="border-line bg-card mb-4 rounded-lg border px-4 pt-3">
-      <legend className="px-1 font-serif text-lg font-semibold">{g.title}</legend>
-      {fontFields
-        .filter((f) => f.group === g.key)
-        .map((f) => (
-          <FontFieldInput
-            key={f.name}
-            field={f}
-            idPrefix={idPrefix}
-            value={draft.text[f.name]}
-            unit={draft.unit}
-            errors={errors[f.name]}
-            readOnly={readOnly}
-            onChange={(v) => update((d) => editField(d, f.name, v))}
-          />
-        ))}
-    </fieldset>
-  ));
-}
-
-function FiguresSection({
-  idPrefix,
-  figures,
-  unit,
-  stale,
-}: {
-  idPrefix: string;
-  figures: Figures;
-  unit: LengthUnit;
-  stale: boolean;
-}) {
-  return (
-    <section aria-labelledby={`${idPrefix}-figures`}>
-      <h2 id={`${idPrefix}-figures`} className="mb-3 font-serif text-xl font-semibold">
-        Figures
-      </h2>
-      <FontFigures figures={figures} units={unit} stale={stale} />
-    </section>
-  );
 }
 
 /** The ghost form is worked out once, when it changes (not on every keystroke). */
@@ -177,17 +94,10 @@ export function FontEditor({
           unit={unit}
         />
       </div>
-      <form
-        className="min-w-0 lg:col-start-1 lg:row-span-2 lg:row-start-1"
-        onSubmit={(e) => e.preventDefault()}
-        noValidate
-        aria-label="Font parameters"
-      >
+      <ParametersForm {...{ idPrefix, draft, errors, formErrors, readOnly, update }}>
         <UnitChoice name={`${idPrefix}-unit`} unit={unit} onChange={(u) => update((d) => switchUnit(d, u))} />
-        <FieldGroups idPrefix={idPrefix} draft={draft} errors={errors} readOnly={readOnly} update={update} />
-        {formErrors.length > 0 && <p className="text-danger text-sm font-medium">{formErrors.join(" ")}</p>}
         {inputName && <input type="hidden" name={inputName} value={JSON.stringify(shownParams)} />}
-      </form>
+      </ParametersForm>
       <div className="grid min-w-0 content-start gap-5 lg:col-start-2 lg:row-start-2">
         {lastValid && (
           <FiguresSection idPrefix={idPrefix} figures={lastValid.figures} unit={unit} stale={!evaluation.ok} />

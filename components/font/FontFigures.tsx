@@ -28,21 +28,86 @@ export interface FontFiguresProps {
 
 function Row({ label, value, basis }: { label: string; value: ReactNode; basis: string }) {
   return (
-    <div className="border-line grid grid-cols-[minmax(0,1fr)_auto] gap-x-4 border-b py-2 last:border-b-0">
+    <div className="grid grid-cols-[minmax(0,1fr)_auto] gap-x-4 border-b border-line py-2 last:border-b-0">
       <dt className="text-ink">{label}</dt>
-      <dd className="text-ink text-right font-semibold tabular-nums">{value}</dd>
-      <dd className="text-ink-soft col-span-2 text-xs">{basis}</dd>
+      <dd className="text-right font-semibold text-ink tabular-nums">{value}</dd>
+      <dd className="col-span-2 text-xs text-ink-soft">{basis}</dd>
     </div>
   );
 }
 
 function Group({ title, children }: { title: string; children: ReactNode }) {
   return (
-    <section className="border-line bg-card rounded-lg border p-4">
+    <section className="rounded-lg border border-line bg-card p-4">
       <h3 className="mb-1 font-serif text-lg font-semibold">{title}</h3>
       <dl className="text-sm">{children}</dl>
     </section>
   );
+}
+
+type RowData = [label: string, value: ReactNode, basis: string];
+
+function engravingRows(f: Figures, L: (mm: number) => string): RowData[] {
+  const n = f.engravings.length;
+  if (n === 0) return [["Engravings", "None", "No engravings in this form"]];
+  return [
+    ["Number", formatNumber(n, 0), "Spaced evenly round the bowl"],
+    [
+      "Angles from the datum",
+      formatList(f.engravings.map((e) => formatAngle(e.angleDeg))),
+      "Anticlockwise seen from above",
+    ],
+    [
+      "Spacing between centres",
+      f.engravingArcSpacingMm === null ? "—" : L(f.engravingArcSpacingMm),
+      "Along the circle through the centres",
+    ],
+  ];
+}
+
+/** Each figure with its value in the chosen units and how it was found, in the groups shown. */
+function figureGroups(f: Figures, units: LengthUnit): { title: string; rows: RowData[] }[] {
+  const L = (mm: number) => formatLength(mm, units);
+  const M = (kg: number) => formatMass(kg, units);
+  const glassOf = (cm3: number) => `${formatVolumeCm3(cm3, units)} of glass`;
+  return [
+    {
+      title: "Bowl",
+      rows: [
+        ["Capacity, full to the brim", formatCapacity(f.capacityLitres, units), "Interior spherical cap"],
+        ["Across the outside of the rim", L(2 * f.outerRimRadiusMm), "Where the outer sphere meets the rim"],
+        ["Rim height above the floor", L(f.rimHeightMm), "Pedestal, foot and bowl stacked"],
+        ["Glass under the interior", L(f.glassUnderInteriorMm), "Wall less the cap ground off for the flat"],
+        [
+          "Lamination contact area",
+          formatArea(f.laminationAreaCm2, units),
+          "The smaller of the flat and the foot's top",
+        ],
+      ],
+    },
+    {
+      title: "Weights",
+      rows: [
+        ["Bowl glass", M(f.bowlMassKg), glassOf(f.bowlGlassVolumeCm3)],
+        ["Foot glass", M(f.footMassKg), glassOf(f.footGlassVolumeCm3)],
+        ["Water when full", M(f.waterMassKg), "Water at 20 °C"],
+        ["Filled weight", M(f.filledMassKg), "Glass and water; the pedestal is not included"],
+      ],
+    },
+    {
+      title: "Standing",
+      rows: [
+        ["Centre of mass, full", L(f.centreOfMassHeightMm), "Height above the floor, glass and water"],
+        ["Tip-over angle", formatAngle(f.tipAngleDeg), "Tilt at which the centre of mass passes the foot's edge"],
+        [
+          "Pressure under the foot",
+          formatPressure(f.bearingPressureKPa, units),
+          "Filled weight over the foot's base area",
+        ],
+      ],
+    },
+    { title: "Engravings", rows: engravingRows(f, L) },
+  ];
 }
 
 /** The derived figures of a font, with units and how each was found. */
@@ -53,88 +118,19 @@ export function FontFigures({
   stale = false,
   className = "",
 }: FontFiguresProps) {
-  const L = (mm: number) => formatLength(mm, units);
-  const M = (kg: number) => formatMass(kg, units);
   const glass = glassMaterials[f.glass];
-  const n = f.engravings.length;
   return (
     <div className={`grid gap-4 font-sans ${stale ? "opacity-60" : ""} ${className}`} data-testid="font-figures">
       <div className="grid gap-4 md:grid-cols-2">
-        <Group title="Bowl">
-          <Row
-            label="Capacity, full to the brim"
-            value={formatCapacity(f.capacityLitres, units)}
-            basis="Interior spherical cap"
-          />
-          <Row
-            label="Across the outside of the rim"
-            value={L(2 * f.outerRimRadiusMm)}
-            basis="Where the outer sphere meets the rim"
-          />
-          <Row label="Rim height above the floor" value={L(f.rimHeightMm)} basis="Pedestal, foot and bowl stacked" />
-          <Row
-            label="Glass under the interior"
-            value={L(f.glassUnderInteriorMm)}
-            basis="Wall less the cap ground off for the flat"
-          />
-          <Row
-            label="Lamination contact area"
-            value={formatArea(f.laminationAreaCm2, units)}
-            basis="The smaller of the flat and the foot's top"
-          />
-        </Group>
-        <Group title="Weights">
-          <Row
-            label="Bowl glass"
-            value={M(f.bowlMassKg)}
-            basis={`${formatVolumeCm3(f.bowlGlassVolumeCm3, units)} of glass`}
-          />
-          <Row
-            label="Foot glass"
-            value={M(f.footMassKg)}
-            basis={`${formatVolumeCm3(f.footGlassVolumeCm3, units)} of glass`}
-          />
-          <Row label="Water when full" value={M(f.waterMassKg)} basis="Water at 20 °C" />
-          <Row label="Filled weight" value={M(f.filledMassKg)} basis="Glass and water; the pedestal is not included" />
-        </Group>
-        <Group title="Standing">
-          <Row
-            label="Centre of mass, full"
-            value={L(f.centreOfMassHeightMm)}
-            basis="Height above the floor, glass and water"
-          />
-          <Row
-            label="Tip-over angle"
-            value={formatAngle(f.tipAngleDeg)}
-            basis="Tilt at which the centre of mass passes the foot's edge"
-          />
-          <Row
-            label="Pressure under the foot"
-            value={formatPressure(f.bearingPressureKPa, units)}
-            basis="Filled weight over the foot's base area"
-          />
-        </Group>
-        <Group title="Engravings">
-          {n === 0 ? (
-            <Row label="Engravings" value="None" basis="No engravings in this form" />
-          ) : (
-            <>
-              <Row label="Number" value={formatNumber(n, 0)} basis="Spaced evenly round the bowl" />
-              <Row
-                label="Angles from the datum"
-                value={formatList(f.engravings.map((e) => formatAngle(e.angleDeg)))}
-                basis="Anticlockwise seen from above"
-              />
-              <Row
-                label="Spacing between centres"
-                value={f.engravingArcSpacingMm === null ? "—" : L(f.engravingArcSpacingMm)}
-                basis="Along the circle through the centres"
-              />
-            </>
-          )}
-        </Group>
+        {figureGroups(f, units).map((g) => (
+          <Group key={g.title} title={g.title}>
+            {g.rows.map(([label, value, basis]) => (
+              <Row key={label} label={label} value={value} basis={basis} />
+            ))}
+          </Group>
+        ))}
       </div>
-      <p className="text-ink-soft text-xs">
+      <p className="text-xs text-ink-soft">
         Densities used: {glass?.label ?? "glass"}, {formatNumber(f.glassDensityKgM3, 0)} kg/m³ (
         {glass?.source ?? "nominal"}); {WATER_DENSITY_SOURCE}.
       </p>

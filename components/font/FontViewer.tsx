@@ -25,7 +25,7 @@ const frame = "relative w-full overflow-hidden rounded-lg border border-line bg-
 
 function ViewerPlaceholder({ text }: { text: string }) {
   return (
-    <div className={`${frame} text-ink-soft flex items-center justify-center`} aria-busy="true">
+    <div className={`${frame} flex items-center justify-center text-ink-soft`} aria-busy="true">
       <p className="font-sans text-sm">{text}</p>
     </div>
   );
@@ -57,8 +57,8 @@ export function FontViewer(props: FontViewerProps) {
 
   const fallback = (why: string, retry: boolean) => (
     <div className={`${frame} flex flex-col items-center justify-center gap-3 p-4`}>
-      <FontSectionDrawing profile={model.profile} className="text-ink h-3/4 w-full" />
-      <p className="text-ink-soft text-center font-sans text-sm">{why}</p>
+      <FontSectionDrawing profile={model.profile} className="h-3/4 w-full text-ink" />
+      <p className="text-center font-sans text-sm text-ink-soft">{why}</p>
       {retry && (
         <button
           type="button"

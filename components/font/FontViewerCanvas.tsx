@@ -170,13 +170,13 @@ function ViewToolbar({ view }: { view: ViewState }) {
 
 function PinList({ pins, onPinSelect }: { pins: ViewerPin[]; onPinSelect?: (pinId: string) => void }) {
   return (
-    <ul className="text-ink-soft grid gap-1 text-sm" aria-label="Points marked on the model">
+    <ul className="grid gap-1 text-sm text-ink-soft" aria-label="Points marked on the model">
       {pins.map((p) => (
         <li key={p.id}>
           {onPinSelect ? (
             <button
               type="button"
-              className="text-action min-h-11 text-left underline-offset-2 hover:underline"
+              className="min-h-11 text-left text-action underline-offset-2 hover:underline"
               onClick={() => onPinSelect(p.id)}
             >
               Comment {p.label} — on the {p.part}

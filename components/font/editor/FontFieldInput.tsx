@@ -22,7 +22,7 @@ export function FontFieldInput({ field, idPrefix, value, unit, errors, readOnly,
 
   return (
     <div className="mb-4">
-      <label htmlFor={id} className="text-ink block text-sm font-medium">
+      <label htmlFor={id} className="block text-sm font-medium text-ink">
         {field.label}
       </label>
       <div className="mt-1 flex items-center gap-2">
@@ -60,19 +60,19 @@ export function FontFieldInput({ field, idPrefix, value, unit, errors, readOnly,
           />
         )}
         {suffix && (
-          <span className="text-ink-soft w-8 shrink-0 text-sm" aria-hidden="true">
+          <span className="w-8 shrink-0 text-sm text-ink-soft" aria-hidden="true">
             {suffix}
           </span>
         )}
       </div>
-      <p id={`${id}-hint`} className="text-ink-soft mt-1 text-xs">
+      <p id={`${id}-hint`} className="mt-1 text-xs text-ink-soft">
         {field.hint}
         {suffix === "mm" || suffix === "in" ? (
           <span className="sr-only"> (in {unit === "in" ? "inches" : "millimetres"})</span>
         ) : null}
       </p>
       {hasError && (
-        <p id={`${id}-error`} className="text-danger mt-1 text-sm font-medium" data-testid={`error-${field.name}`}>
+        <p id={`${id}-error`} className="mt-1 text-sm font-medium text-danger" data-testid={`error-${field.name}`}>
           {errors.join(" ")}
         </p>
       )}

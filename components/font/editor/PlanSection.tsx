@@ -27,7 +27,7 @@ function Choice(props: {
       <select
         value={props.value}
         onChange={(e) => props.onChange(e.target.value)}
-        className="border-line bg-card mt-1 block min-h-11 w-full rounded-md border px-3 text-base"
+        className="mt-1 block min-h-11 w-full rounded-md border border-line bg-card px-3 text-base"
       >
         {props.options.map((o) => (
           <option key={o.id} value={o.id}>
@@ -42,7 +42,7 @@ function Choice(props: {
 /** The cold-working plan with the machine and abrasive set it is made for. */
 export function PlanSection({ idPrefix, plan, unit, studioSettings, choice, onChoose }: PlanSectionProps) {
   return (
-    <section aria-labelledby={`${idPrefix}-plan`} className="border-line bg-card rounded-lg border p-4">
+    <section aria-labelledby={`${idPrefix}-plan`} className="rounded-lg border border-line bg-card p-4">
       <h2 id={`${idPrefix}-plan`} className="mb-3 font-serif text-xl font-semibold">
         Cold-working plan
       </h2>

@@ -149,7 +149,7 @@ function Pins({ pins, colour, rimRadius }: { pins: ViewerPin[]; colour: string; 
           </mesh>
           <Html center zIndexRange={[10, 0]} style={{ pointerEvents: "none" }}>
             <span
-              className="bg-card text-record block translate-y-[-1.4rem] rounded px-1.5 text-xs font-semibold whitespace-nowrap shadow"
+              className="block translate-y-[-1.4rem] rounded bg-card px-1.5 text-xs font-semibold whitespace-nowrap text-record shadow"
               title={pin.label}
             >
               {pin.label || i + 1}
