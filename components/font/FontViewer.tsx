@@ -8,7 +8,7 @@
  */
 import dynamic from "next/dynamic";
 import { Component, useEffect, useId, useMemo, useState, type ReactNode } from "react";
-import { describeFont } from "@/models/font";
+import { describeFont, type FontModel } from "@/models/font";
 import { buttonClass } from "@/components/ui/button";
 import { FontSectionDrawing } from "./FontSectionDrawing";
 import { hasWebGL } from "./webgl";
@@ -43,6 +43,21 @@ class ViewerErrorBoundary extends Component<{ fallback: ReactNode; children: Rea
 
 type Mode = "checking" | "3d" | "no-webgl" | "lost";
 
+/** The flat cross-section shown instead of the 3D view, with why, and a retry when it may work again. */
+function SectionFallback({ model, why, onRetry }: { model: FontModel; why: string; onRetry?: () => void }) {
+  return (
+    <div className={`${frame} flex flex-col items-center justify-center gap-3 p-4`}>
+      <FontSectionDrawing profile={model.profile} className="h-3/4 w-full text-ink" />
+      <p className="text-center font-sans text-sm text-ink-soft">{why}</p>
+      {onRetry && (
+        <button type="button" className={buttonClass("secondary")} onClick={onRetry}>
+          Try the 3D view again
+        </button>
+      )}
+    </div>
+  );
+}
+
 export function FontViewer(props: FontViewerProps) {
   const { model, units = "mm", className = "", label = "3D view of the font" } = props;
   const summaryId = useId();
@@ -55,23 +70,12 @@ export function FontViewer(props: FontViewerProps) {
 
   const summary = useMemo(() => describeFont(model.params, model.figures, units), [model, units]);
 
-  const fallback = (why: string, retry: boolean) => (
-    <div className={`${frame} flex flex-col items-center justify-center gap-3 p-4`}>
-      <FontSectionDrawing profile={model.profile} className="h-3/4 w-full text-ink" />
-      <p className="text-center font-sans text-sm text-ink-soft">{why}</p>
-      {retry && (
-        <button
-          type="button"
-          className={buttonClass("secondary")}
-          onClick={() => {
-            setAttempt((n) => n + 1);
-            setMode("3d");
-          }}
-        >
-          Try the 3D view again
-        </button>
-      )}
-    </div>
+  const retry = () => {
+    setAttempt((n) => n + 1);
+    setMode("3d");
+  };
+  const fallback = (why: string, canRetry: boolean) => (
+    <SectionFallback model={model} why={why} onRetry={canRetry ? retry : undefined} />
   );
 
   let body: ReactNode;

@@ -78,7 +78,8 @@ afterEach(() => {
   host?.remove();
 });
 
-describe("the editor works the font out once per change", () => {
+// Rendering the whole editor in jsdom is slow on a busy machine; the counts, not the time, are checked.
+describe("the editor works the font out once per change", { timeout: 30_000 }, () => {
   it("one profile, one geometry and one set of figures for each keystroke", () => {
     mount(createElement(FontEditor, { studioSettings: demoStudioSettings }));
     expect(host.querySelector('[aria-label="Cross-section of the font"]')).not.toBeNull();
@@ -114,7 +115,7 @@ describe("the editor works the font out once per change", () => {
   });
 });
 
-describe("views read the model they are given", () => {
+describe("views read the model they are given", { timeout: 30_000 }, () => {
   it("figures a server sent are used as they are; only the profile is built", () => {
     const sent = evaluateFont(defaultFontParameters);
     if (!sent.ok) throw new Error("the default font should be valid");
