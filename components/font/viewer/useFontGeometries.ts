@@ -39,12 +39,8 @@ export function buildFontGeometries(
 }
 
 /** The meshes for one form, rebuilt when its profile or the view changes and disposed afterwards. */
-export function useFontGeometries(
-  profile: FontProfile,
-  section: boolean,
-  segments = DEFAULT_LATHE_SEGMENTS,
-  withCuts = true,
-): FontGeometries {
+export function useFontGeometries(...args: Parameters<typeof buildFontGeometries>): FontGeometries {
+  const [profile, section, segments, withCuts] = args;
   const geos = useMemo(
     () => buildFontGeometries(profile, section, segments, withCuts),
     [profile, section, segments, withCuts],
