@@ -8,7 +8,7 @@ import { appendTrail } from "@/lib/trail";
 import { exportRecord, loadChain } from "@/lib/dal/trail";
 import { NotFoundError } from "@/lib/errors";
 import { verifyChain, verifyRecord } from "@/models/trail/node-hash";
-import { freshDemo, viewer } from "./db";
+import { asMigrator, freshDemo, viewer } from "./db";
 
 const run = promisify(execFile);
 let ids: Awaited<ReturnType<typeof freshDemo>>;
@@ -17,11 +17,14 @@ afterAll(async () => { await closeDb(); });
 
 describe("the trail table is append-only", () => {
   const refusal = (p: Promise<unknown>) => p.then(() => "accepted", (e) => String(e?.cause?.message ?? e?.message));
-  it("the database refuses UPDATE", async () => {
-    expect(await refusal(getDb().execute(sql`UPDATE trail_events SET action = 'stage changed' WHERE commission_id = ${ids.commissionId}`))).toMatch(/append-only: UPDATE refused/);
+  it("the app's user may not UPDATE or DELETE it at all", async () => {
+    expect(await refusal(getDb().execute(sql`UPDATE trail_events SET action = 'stage changed' WHERE commission_id = ${ids.commissionId}`))).toMatch(/UPDATE command denied/);
+    expect(await refusal(getDb().execute(sql`DELETE FROM trail_events WHERE commission_id = ${ids.commissionId}`))).toMatch(/DELETE command denied/);
   });
-  it("the database refuses DELETE", async () => {
-    expect(await refusal(getDb().execute(sql`DELETE FROM trail_events WHERE commission_id = ${ids.commissionId}`))).toMatch(/append-only: DELETE refused/);
+  it("and the triggers refuse UPDATE and DELETE even to a user with those privileges", async () => {
+    const asM = (q: string) => asMigrator((c) => c.query(q, [ids.commissionId]));
+    expect(await refusal(asM("UPDATE trail_events SET action = 'stage changed' WHERE commission_id = ?"))).toMatch(/append-only: UPDATE refused/);
+    expect(await refusal(asM("DELETE FROM trail_events WHERE commission_id = ?"))).toMatch(/append-only: DELETE refused/);
     expect((await loadChain(ids.commissionId)).length).toBeGreaterThan(0);
   });
 });
@@ -75,10 +78,12 @@ describe("npm run trail:verify", () => {
     const env = { ...process.env, DATABASE_URL: databaseUrl() };
     const ok = await run("npx", ["tsx", "--conditions=react-server", "scripts/trail-verify.ts"], { env });
     expect(ok.stdout).toMatch(/chains hold/);
-    // Test-only: drop the guard in this throwaway database to simulate someone editing rows by hand.
-    await getDb().execute(sql`DROP TRIGGER trail_events_no_update`);
+    // Test-only: the migrator drops the guard in this throwaway database to simulate someone editing rows by hand.
     const [third] = await getDb().select().from(trailEvents).where(eq(trailEvents.commissionId, ids.commissionId)).orderBy(asc(trailEvents.seq)).limit(1).offset(2);
-    await getDb().execute(sql`UPDATE trail_events SET payload = ${JSON.stringify({ ...third.payload, role: "chair" })} WHERE id = ${third.id}`);
+    await asMigrator(async (c) => {
+      await c.query("DROP TRIGGER trail_events_no_update");
+      await c.query("UPDATE trail_events SET payload = ? WHERE id = ?", [JSON.stringify({ ...third.payload, role: "chair" }), third.id]);
+    });
     const bad = await run("npx", ["tsx", "--conditions=react-server", "scripts/trail-verify.ts"], { env }).catch((e) => e);
     expect(bad.code).toBe(1);
     expect(bad.stdout).toMatch(new RegExp(`FAIL\\s+commission ${ids.commissionId} .*seq 3: hash mismatch`));
