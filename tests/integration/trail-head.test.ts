@@ -9,9 +9,12 @@ import { eq, like, sql } from "drizzle-orm";
 import { closeDb, databaseUrl, getDb } from "@/db/client";
 import { commissions, outbox } from "@/db/schema";
 import { recordDecision } from "@/lib/dal/decisions";
+import { decisionRecordFor } from "@/lib/dal/record";
 import { exportRecord, loadChain } from "@/lib/dal/trail";
+import { renderDecisionRecordPdf } from "@/lib/record-pdf";
 import { parseHead, type TrailEvent, type TrailHead } from "@/models/trail";
 import { sealEvent, verifyChain, verifyRecord } from "@/models/trail/node-hash";
+import { pdfPageTexts } from "../pdf-text";
 import { PEOPLE, circulateNext, signedIn } from "./ballot-helpers";
 import { asMigrator, freshDemo, viewer } from "./db";
 
@@ -56,7 +59,7 @@ async function tamper(fn: (c: import("mysql2/promise").Connection) => Promise<un
   });
 }
 
-beforeEach(async () => { mailHead = await demoWithDecision(); }, 60_000);
+beforeEach(async () => { mailHead = await demoWithDecision(); }, 180_000);
 afterAll(async () => { await closeDb(); });
 
 describe("the app's database user", () => {
@@ -90,8 +93,19 @@ describe("the head", () => {
     expect(rec.head).toEqual(mailHead);
     expect(verifyRecord(rec, mailHead)).toMatchObject({ ok: true, count: mailHead.seq });
     expect((await trailVerify()).code).toBe(0);
-  }, 60_000);
+  }, 180_000);
+
+  it("the PDF record prints the head in full, to be pasted into /verify", async () => {
+    const text = await pdfText();
+    expect(text).toMatch(new RegExp(`Trail head: event ${mailHead.seq}, hash\\s*${mailHead.hash}`));
+    expect(text).not.toContain("Warning: the commission's head");
+  });
 });
+
+async function pdfText(): Promise<string> {
+  const record = await decisionRecordFor(await viewer("david@stwenna.test"), ids.commissionId);
+  return (await pdfPageTexts(await renderDecisionRecordPdf(record, {}))).join(" ").replace(/\s+/g, " ");
+}
 
 /** What each check says about the commission's chain after an attack. */
 async function verdicts() {
@@ -111,7 +125,8 @@ describe("attacks by someone with the database's own rights, triggers dropped", 
     expect(v.script.stdout).toContain(`at seq ${mailHead.seq}: shortened — The record ends at event ${mailHead.seq - 1} but the commission's head is event ${mailHead.seq}`);
     expect(v.withMailHead).toMatchObject({ ok: false, seq: mailHead.seq, reason: "shortened" });
     expect(v.withFileHead).toMatchObject({ ok: false, seq: mailHead.seq, reason: "shortened" });
-  }, 60_000);
+    expect(await pdfText()).toContain(`Warning: the commission's head is event ${mailHead.seq} but the trail above ends at entry ${mailHead.seq - 1}`);
+  }, 180_000);
 
   it("removing the last three events is caught, naming the first missing seq", async () => {
     await tamper((c) => c.query("DELETE FROM trail_events WHERE commission_id = ? AND seq > ?", [ids.commissionId, mailHead.seq - 3]));
@@ -122,7 +137,7 @@ describe("attacks by someone with the database's own rights, triggers dropped", 
     expect(v.script.stdout).toContain(`at seq ${first}: shortened — The record ends at event ${first - 1} but the commission's head is event ${mailHead.seq}: events ${first}–${mailHead.seq} are missing`);
     expect(v.withMailHead).toMatchObject({ ok: false, seq: first, reason: "shortened" });
     expect(v.withMailHead.ok || v.withMailHead.message).toMatch(`but the head you gave is event ${mailHead.seq}`);
-  }, 60_000);
+  }, 180_000);
 
   it("rewriting the whole chain consistently from event 10 onward is caught at the head", async () => {
     const chain = await loadChain(ids.commissionId);
@@ -158,5 +173,5 @@ describe("attacks by someone with the database's own rights, triggers dropped", 
     const after = await verdicts();
     expect(after.script.code).toBe(0); // the database alone can no longer tell: only an outside copy of the head can
     expect(after.withMailHead).toMatchObject({ ok: false, seq: mailHead.seq, reason: "head mismatch" });
-  }, 90_000);
+  }, 240_000);
 });
