@@ -2,7 +2,9 @@
 ROOT="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
 export ROOT
 # Local overrides (ports, a second checkout beside this one): .ports.local is never committed.
-[ -f "$ROOT/.ports.local" ] && source "$ROOT/.ports.local"
+# Read once per run: a script started by another (scripts/mail.sh from scripts/test.sh) keeps the ports its
+# parent chose for the end-to-end servers instead of reading the checkout's own ones again.
+if [ -z "${PLACET_PORTS_LOADED:-}" ] && [ -f "$ROOT/.ports.local" ]; then source "$ROOT/.ports.local"; export PLACET_PORTS_LOADED=1; fi
 export DATA_DIR="${DATA_DIR:-$ROOT/.data}"
 export DB_PORT="${DB_PORT:-3307}"
 export DB_NAME="${DB_NAME:-placet}"
