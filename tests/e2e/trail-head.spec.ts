@@ -6,7 +6,7 @@ import { makePerson, newCommissionViaForm, signInAs, sql, waitForMail } from "./
  * mail is what catches it (a hash chain shows truncation only against a head kept outside it: RFC 6962 §2.1).
  */
 test("the decision mail's trail head: /verify says whether a record file reaches it", async ({ page, browser }, info) => {
-  test.setTimeout(150_000);
+  test.setTimeout(300_000);
   const baseURL = String(info.project.use.baseURL ?? "http://localhost:3100");
   await signInAs(page, await makePerson("designer"));
   const { title, commissionId } = await newCommissionViaForm(page, "Font for the north aisle", "St Ia's — Fabric Committee", "St Ia's, Trevenna: the north aisle");
