@@ -3,7 +3,7 @@ import { execFile } from "node:child_process";
 import { promisify } from "node:util";
 import { asc, eq, sql } from "drizzle-orm";
 import { closeDb, databaseUrl, getDb } from "@/db/client";
-import { commissionMembers, trailEvents } from "@/db/schema";
+import { commissionMembers, commissions, trailEvents } from "@/db/schema";
 import { appendTrail } from "@/lib/trail";
 import { exportRecord, loadChain } from "@/lib/dal/trail";
 import { NotFoundError } from "@/lib/errors";
@@ -88,4 +88,26 @@ describe("npm run trail:verify", () => {
     expect(bad.code).toBe(1);
     expect(bad.stdout).toMatch(new RegExp(`FAIL\\s+commission ${ids.commissionId} .*seq 3: hash mismatch`));
   }, 60_000);
+});
+
+describe("migration 0007 on existing chains", () => {
+  it("backfills each commission's head with its chain's last event", async () => {
+    const { readFile } = await import("node:fs/promises");
+    const text = await readFile("db/migrations/0007_trail_head.sql", "utf8");
+    const backfill = text.split("--> statement-breakpoint")[1];
+    expect(backfill).toMatch(/UPDATE `commissions`/);
+    await asMigrator(async (c) => {
+      // As a database from before the head existed: every head at its default.
+      await c.query("DROP TRIGGER commissions_trail_head_forward");
+      await c.query("UPDATE commissions SET trail_head_seq = 0, trail_head_hash = REPEAT('0', 64)");
+      await c.query(backfill);
+    });
+    const rows = await getDb().select().from(commissions);
+    expect(rows.length).toBeGreaterThanOrEqual(2);
+    for (const row of rows) {
+      const chain = await loadChain(row.id);
+      const last = chain[chain.length - 1];
+      expect({ seq: row.trailHeadSeq, hash: row.trailHeadHash }).toEqual(last ? { seq: last.seq, hash: last.hash } : { seq: 0, hash: "0".repeat(64) });
+    }
+  });
 });
