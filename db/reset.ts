@@ -1,12 +1,11 @@
 import mysql from "mysql2/promise";
 import { runMigrations } from "./migrate";
+import { databaseName, migratorUrl } from "./urls";
 
-/** Drops and recreates the database named in `url`, then applies every migration. */
+/** Drops and recreates the database named in the app's `url` (as the migrator), then applies every migration. */
 export async function resetDatabase(url: string): Promise<void> {
-  const u = new URL(url);
-  const name = decodeURIComponent(u.pathname.slice(1));
-  if (!/^[A-Za-z0-9_]+$/.test(name)) throw new Error(`refusing odd database name ${name}`);
-  const server = new URL(url);
+  const name = databaseName(url);
+  const server = new URL(migratorUrl(url));
   server.pathname = "/";
   const conn = await mysql.createConnection({ uri: server.toString() });
   try {

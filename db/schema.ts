@@ -94,6 +94,9 @@ export const commissions = mysqlTable("commissions", {
   chairVotes: boolean("chair_votes").notNull().default(false),
   /** The bylaw clause or resolution allowing electronic ballots; null = votes are taken at meetings. */
   electronicAuthority: varchar("electronic_authority", { length: 500 }),
+  /** The trail's head: the last appended event's seq and hash, moved in the same transaction as each append. */
+  trailHeadSeq: int("trail_head_seq", { unsigned: true }).notNull().default(0),
+  trailHeadHash: varchar("trail_head_hash", { length: 64 }).notNull().default("0".repeat(64)),
   createdAt: now(),
   updatedAt: utc("updated_at").notNull().default(sql`CURRENT_TIMESTAMP(3)`),
 }, (t) => [index("commissions_studio").on(t.studioId)]);

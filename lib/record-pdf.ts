@@ -2,6 +2,7 @@ import "server-only";
 import { PDFDocument, StandardFonts } from "pdf-lib";
 import type { DecisionDto } from "@/models/decision";
 import { ROLE_LABELS } from "@/models/permissions/policy";
+import { formatHead } from "@/models/trail/head";
 import type { DecisionRecordDto } from "./dal/record";
 import { fitLine, footPages, GOLD, INK, MUTED, Writer, type Style } from "./pdf/layout";
 import { toWinAnsi } from "./pdf/winansi";
@@ -154,7 +155,9 @@ export async function renderDecisionRecordPdf(input: DecisionRecordDto, opts: Re
   return doc.save({ useObjectStreams: false });
 }
 
-/** The box at the end: the final hash in full, and how to check it. Never split across pages. */
+const headAgrees = (r: DecisionRecordDto) => r.head.seq === r.lastSeq && r.head.hash === r.finalHash;
+
+/** The box at the end: the final hash and the trail head in full, and how to check them. Never split across pages. */
 function drawRecordBox(w: Writer, input: DecisionRecordDto, opts: RecordPdfOptions, f: Record<"bold" | "sans" | "serif", Style["font"]>) {
   const pad = 16;
   const inner = w.width - 2 * pad;
@@ -173,6 +176,11 @@ function drawRecordBox(w: Writer, input: DecisionRecordDto, opts: RecordPdfOptio
     ["Final hash", st.label, 2],
     [input.finalHash, st.hash, 2],
     [input.lastSeq ? `The hash of entry ${input.lastSeq}, the last in the trail above.` : "The trail has no entries yet.", st.meta, 0],
+    ["Trail head (held by the commission as this record was prepared)", st.label, 2],
+    [`Trail head: ${formatHead(input.head)}`, st.hash, 2],
+    [headAgrees(input)
+      ? "Paste this line into /verify beside the JSON record: the record must reach this head, or it has been cut short or rewritten."
+      : `Warning: the commission's head is event ${input.head.seq} but the trail above ends at entry ${input.lastSeq}; the trail has been cut short or rewritten since it was recorded.`, st.meta, 10],
     [`Record format: ${input.formatId}`, st.meta, 10],
     [`Download the JSON record from the trail page and check it at /verify, or with any SHA-256 tool following the format described in the record; the final hash must match the one printed here.${where}${later}`, st.text, 10],
     [`The format, as the record describes it: ${input.formatDescription}`, st.fine, 0],

@@ -1,7 +1,7 @@
 import "server-only";
-import { desc, eq, sql } from "drizzle-orm";
+import { eq, sql } from "drizzle-orm";
 import type { Db } from "@/db/client";
-import { trailEvents } from "@/db/schema";
+import { commissions, trailEvents } from "@/db/schema";
 import { GENESIS_HASH, type TrailAction, type TrailEventBody } from "@/models/trail";
 import { hashEventSync } from "@/models/trail/node-hash";
 
@@ -22,18 +22,25 @@ export interface TrailEntry {
   payload: Record<string, unknown>;
 }
 
+/** The head the commission row holds: the last appended event's seq and hash (seq 0 and 64 zeros: none yet). */
+export interface TrailHead {
+  seq: number;
+  hash: string;
+}
+
 /**
  * Appends one event to the commission's chain, inside the caller's transaction: if the append fails the
- * whole change rolls back. The chain head is read under the commission's row lock.
+ * whole change rolls back. The head is read from the commission row under its lock and moved to the new
+ * event in the same transaction, so the row always names the chain's true end.
  */
 export async function appendTrail(tx: Tx, e: TrailEntry) {
-  await lockCommission(tx, e.commissionId);
-  const [last] = await tx
-    .select({ seq: trailEvents.seq, hash: trailEvents.hash })
-    .from(trailEvents)
-    .where(eq(trailEvents.commissionId, e.commissionId))
-    .orderBy(desc(trailEvents.seq))
-    .limit(1);
+  const [head] = await tx
+    .select({ seq: commissions.trailHeadSeq, hash: commissions.trailHeadHash })
+    .from(commissions)
+    .where(eq(commissions.id, e.commissionId))
+    .for("update");
+  if (!head) throw new Error(`no commission ${e.commissionId} to append to`);
+  const last = head.seq > 0 ? head : null;
   const at = new Date();
   const body: TrailEventBody = {
     commissionId: e.commissionId,
@@ -49,5 +56,6 @@ export async function appendTrail(tx: Tx, e: TrailEntry) {
   };
   const hash = hashEventSync(body.prevHash, body);
   await tx.insert(trailEvents).values({ ...body, at, hash });
+  await tx.update(commissions).set({ trailHeadSeq: body.seq, trailHeadHash: hash }).where(eq(commissions.id, e.commissionId));
   return { ...body, hash };
 }

@@ -32,18 +32,23 @@ up() {
   create_db "$DB_NAME"
 }
 
+# The database and its two users. The app's user gets no database-wide privilege here: its table-level
+# grants (rows only; trail_events SELECT and INSERT) are given by the migrate script after each migration.
 create_db() {
-  local name="$1"
-  "${CLIENT[@]}" <<SQL
-CREATE DATABASE IF NOT EXISTS \`$name\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci;
-CREATE USER IF NOT EXISTS '$DB_USER'@'127.0.0.1' IDENTIFIED BY '$DB_PASSWORD';
-CREATE USER IF NOT EXISTS '$DB_USER'@'localhost' IDENTIFIED BY '$DB_PASSWORD';
-GRANT ALL PRIVILEGES ON \`$name\`.* TO '$DB_USER'@'127.0.0.1';
-GRANT ALL PRIVILEGES ON \`$name\`.* TO '$DB_USER'@'localhost';
-GRANT ALL PRIVILEGES ON \`${DB_NAME}_test%\`.* TO '$DB_USER'@'127.0.0.1';
-GRANT ALL PRIVILEGES ON \`${DB_NAME}_test%\`.* TO '$DB_USER'@'localhost';
-FLUSH PRIVILEGES;
-SQL
+  local name="$1" h
+  [ "$DB_USER" != "$DB_MIGRATOR_USER" ] || { echo "DB_USER and DB_MIGRATOR_USER must differ" >&2; exit 2; }
+  {
+    echo "CREATE DATABASE IF NOT EXISTS \`$name\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci;"
+    for h in 127.0.0.1 localhost; do
+      echo "CREATE USER IF NOT EXISTS '$DB_USER'@'$h' IDENTIFIED BY '$DB_PASSWORD';"
+      echo "CREATE USER IF NOT EXISTS '$DB_MIGRATOR_USER'@'$h' IDENTIFIED BY '$DB_MIGRATOR_PASSWORD';"
+      echo "GRANT ALL PRIVILEGES ON \`$name\`.* TO '$DB_MIGRATOR_USER'@'$h' WITH GRANT OPTION;"
+      echo "GRANT ALL PRIVILEGES ON \`${DB_NAME}_test%\`.* TO '$DB_MIGRATOR_USER'@'$h' WITH GRANT OPTION;"
+    done
+    # An older set-up gave the app's user ALL on the database: take every database-wide grant back.
+    echo "DELETE FROM mysql.db WHERE User = '$DB_USER';"
+    echo "FLUSH PRIVILEGES;"
+  } | "${CLIENT[@]}"
 }
 
 down() {

@@ -23,6 +23,7 @@ cleanup() {
 }
 trap cleanup INT TERM EXIT
 
+# Migrations and grants run as the migrator (MIGRATOR_URL); the app as its own user (DATABASE_URL).
 npx tsx scripts/migrate.ts
 npx tsx --conditions=react-server scripts/seed.ts --if-empty
 bash scripts/mail.sh
@@ -40,6 +41,8 @@ cat <<MSG
 
   Placet is running at http://localhost:$PORT   (use "localhost", not 127.0.0.1: sign-in cookies are set for it)
   Mail inbox (sign-in links land here): http://localhost:$MAIL_WEB_PORT
+  Database users: the app runs as $DB_USER (rows only; trail_events: SELECT and INSERT, nothing else);
+  migrations as $DB_MIGRATOR_USER (tables, triggers, grants).
 
   Sign in with any of these invented demo people; the link arrives in the inbox above:
     tamsin@hollowmere.test    studio owner        (Hollowmere Glass)

@@ -2,6 +2,7 @@ import "server-only";
 import { eq } from "drizzle-orm";
 import { commissionMembers, commissions, studioMembers, users } from "@/db/schema";
 import type { DecisionDto } from "@/models/decision";
+import { formatHead } from "@/models/trail/head";
 import { env } from "../env";
 import { enqueueMail } from "../outbox";
 import type { Tx } from "../trail";
@@ -24,6 +25,9 @@ export async function mailDecision(tx: Tx, c: typeof commissions.$inferSelect, d
   const conditions = d.conditions.length ? `\nConditions:\n${d.conditions.map((x, i) => `${i + 1}. ${x}`).join("\n")}\n` : "";
   const statement = d.statement ? `\nStatement:\n${d.statement}\n` : "";
   const when = `${d.recordedAt.slice(0, 16).replace("T", " ")} UTC`;
+  // The head as it stands in this transaction, after the decision's own trail entries.
+  const [head] = await tx.select({ seq: commissions.trailHeadSeq, hash: commissions.trailHeadHash }).from(commissions).where(eq(commissions.id, c.id));
+  const anchor = `\nTrail head after this decision: ${formatHead(head)}\nKeep this mail: a downloaded record of this commission must reach this head (paste the line above into ${env.appUrl}/verify), or it has been cut short or rewritten.\n`;
   await enqueueMail(tx, people.map((p) => ({
     dedupeKey: `decision:${d.revisionId}:${p.id}`,
     to: p.email,
@@ -31,6 +35,6 @@ export async function mailDecision(tx: Tx, c: typeof commissions.$inferSelect, d
     text:
       `Dear ${p.name ?? p.email},\n\n${d.recordedByName}, as chair, recorded the committee's decision on Revision ${d.number} of "${c.title}" on ${when}.\n\n` +
       `Decision: ${d.outcomeLabel}\n${conditions}${statement}\nThe vote: ${voteLine(d)}\n\n` +
-      `Revision ${d.number}'s content hash (SHA-256): ${d.contentHash}\n\nThe revision and the decision trail:\n${link}\n`,
+      `Revision ${d.number}'s content hash (SHA-256): ${d.contentHash}\n\nThe revision and the decision trail:\n${link}\n${anchor}`,
   })));
 }

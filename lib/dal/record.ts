@@ -1,7 +1,7 @@
 import "server-only";
 import { getDb } from "@/db/client";
 import type { DecisionDto } from "@/models/decision";
-import { GENESIS_HASH, RECORD_FORMAT, RECORD_FORMAT_ID } from "@/models/trail";
+import { GENESIS_HASH, RECORD_FORMAT, RECORD_FORMAT_ID, type TrailHead } from "@/models/trail";
 import { authorize } from "./access";
 import { getCommission } from "./commissions";
 import { getDecision } from "./decisions";
@@ -20,6 +20,8 @@ export interface DecisionRecordDto {
   /** The last entry's hash (64 zeros if there is none), as in the JSON record. */
   finalHash: string;
   lastSeq: number;
+  /** The head the commission row holds, read with the trail; it should be entry lastSeq with finalHash. */
+  head: TrailHead;
   formatId: string;
   formatDescription: string;
   preparedAt: string;
@@ -46,6 +48,7 @@ export async function decisionRecordFor(viewer: Viewer, commissionId: number): P
     trail: trail.entries,
     finalHash: trail.finalHash ?? GENESIS_HASH,
     lastSeq: last?.seq ?? 0,
+    head: trail.head,
     formatId: RECORD_FORMAT_ID,
     formatDescription: RECORD_FORMAT,
     preparedAt: new Date().toISOString(),

@@ -15,7 +15,12 @@ const ACTIVE: Record<string, string> = {
   SubmitForm: "a form that sends data elsewhere",
   ImportData: "a form that loads outside data",
   GoToE: "a link into a hidden embedded file",
+  AA: "additional actions (/AA) that run by themselves when a page or field is opened or closed",
+  URI: "a link action that opens a web address (/URI)",
+  GoToR: "an action that opens another file (/GoToR)",
 };
+
+const OPEN_ACTION = "an open action (/OpenAction) that runs an action as soon as the file is opened";
 
 const WHITESPACE = new Set([0x00, 0x09, 0x0a, 0x0c, 0x0d, 0x20]);
 
@@ -76,13 +81,25 @@ function scanObjects(doc: PDFDocument): string | null {
     const found = check(obj, 0);
     if (found) return found;
   }
-  return check(doc.context.trailerInfo.Root, 0);
+  return check(doc.context.trailerInfo.Root, 0) ?? openAction(doc);
+}
+
+/** An /OpenAction may name a page to show (an array); a dictionary is an action, and is refused. */
+function openAction(doc: PDFDocument): string | null {
+  let value: PDFObject | undefined;
+  try {
+    value = doc.catalog.lookup(PDFName.of("OpenAction"));
+  } catch {
+    return OPEN_ACTION;
+  }
+  return value === undefined || value instanceof PDFArray ? null : OPEN_ACTION;
 }
 
 /**
  * A PDF is kept byte for byte, so it must be plainly one: `%PDF-` first, `%%EOF` within the
  * last KiB with nothing after it but whitespace, not also a ZIP, not encrypted, at least one
- * page, and no scripts, launch actions or embedded files.
+ * page, and no scripts, launch actions, embedded files, additional actions (/AA), web-address or
+ * other-file actions (/URI, /GoToR), nor an /OpenAction that runs an action.
  */
 export async function checkPdf(bytes: Uint8Array, shown: string): Promise<{ problem: NonNullable<Problem> } | { pages: number }> {
   const fail = (code: NonNullable<Problem>["code"], message: string) => ({ problem: { code, message } });
@@ -100,7 +117,7 @@ export async function checkPdf(bytes: Uint8Array, shown: string): Promise<{ prob
   }
   const active = (label: string) =>
     fail("pdf_active_content", `${shown} contains ${label}. Only plain PDFs are accepted; print or export it to a new PDF and upload that.`);
-  const rawFinding = scanRaw(text);
+  const rawFinding = scanRaw(text) ?? (/\/OpenAction\s*<</u.test(withoutStreams(text)) ? OPEN_ACTION : null);
   if (rawFinding) return active(rawFinding);
 
   let doc: PDFDocument;

@@ -30,7 +30,7 @@ export type UploadRefusalCode =
   | "polyglot" // a second file hidden in or after the first
   | "pdf_malformed" // missing %PDF- header or %%EOF, unreadable structure, no pages
   | "pdf_encrypted" // password-protected
-  | "pdf_active_content" // scripts, launch actions, embedded files
+  | "pdf_active_content" // scripts, launch actions, embedded files, /AA, /URI, /GoToR, an /OpenAction action
   | "too_many_files"; // over MAX_FILES_PER_REVISION
 
 export interface UploadRefusal {

@@ -15,13 +15,15 @@ export {
   buildRecord,
   parseRecord,
   parseRecordText,
+  recordOptions,
   trailRecordSchema,
   verifyRecordAsync,
   type ParseRecordResult,
   type RecordErrors,
   type TrailRecord,
 } from "./record";
-export type { ChainFailureReason, VerifyOptions, VerifyResult } from "./verify-core";
+export { EMPTY_HEAD, formatHead, parseHead, type ParseHeadResult, type TrailHead } from "./head";
+export type { ChainFailureReason, HeadCheck, VerifyOptions, VerifyResult } from "./verify-core";
 export {
   WebCryptoUnavailableError,
   hashEventAsync,

@@ -2,7 +2,8 @@
 // client components; they use verifyChainAsync from "@/models/trail".
 import { createHash } from "node:crypto";
 import { eventBody, hashInput, type TrailEvent, type TrailEventBody } from "./event";
-import type { TrailRecord } from "./record";
+import type { TrailHead } from "./head";
+import { recordOptions, type TrailRecord } from "./record";
 import { planChain, settleChain, type VerifyOptions, type VerifyResult } from "./verify-core";
 
 /** Lowercase hex SHA-256 of the UTF-8 bytes of `text`. */
@@ -34,7 +35,7 @@ export function verifyChain(events: readonly unknown[], opts: VerifyOptions = {}
   return settleChain(plan, -1, "", opts);
 }
 
-/** Verifies a parsed record against its own commission id and stated final hash. */
-export function verifyRecord(record: TrailRecord): VerifyResult {
-  return verifyChain(record.events, { expectedCommissionId: record.commission.id, expectedFinalHash: record.finalHash });
+/** Verifies a parsed record against its commission id, final hash, stored head and optionally a quoted head. */
+export function verifyRecord(record: TrailRecord, quoted?: TrailHead): VerifyResult {
+  return verifyChain(record.events, recordOptions(record, quoted));
 }

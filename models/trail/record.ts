@@ -1,6 +1,7 @@
 import * as z from "zod";
 import { GENESIS_HASH, formatIssues, need, trailEventSchema, type TrailEvent } from "./event";
-import type { VerifyResult } from "./verify-core";
+import type { TrailHead } from "./head";
+import type { HeadCheck, VerifyOptions, VerifyResult } from "./verify-core";
 import { verifyChainAsync } from "./web-hash";
 
 export const RECORD_FORMAT_ID = "placet-trail/1";
@@ -15,7 +16,10 @@ export const RECORD_FORMAT = [
   "with its `hash` field removed, so C contains prevHash as well.",
   "Each event's `prevHash` equals the previous event's `hash`.",
   "`finalHash` is the last event's hash (64 zeros if there are none): compare it with the final hash printed",
-  "on the decision record. Times are UTC, ISO 8601 with milliseconds.",
+  "on the decision record. `head` is the head the commission held when the file was exported (the seq and",
+  "hash of its last event); the events must end exactly there. Mails and the decision record quote the head",
+  "at their moment as \"event N, hash H\": the file reaches such a head if its event N has the hash H.",
+  "Times are UTC, ISO 8601 with milliseconds.",
 ].join(" ");
 
 export type TrailRecord = {
@@ -25,7 +29,11 @@ export type TrailRecord = {
   exportedAt: string;
   events: TrailEvent[];
   finalHash: string;
+  /** The commission's stored head at export; files exported before heads were stored have none. */
+  head?: TrailHead;
 };
+
+const hex64 = () => z.string(need("text")).regex(/^[0-9a-f]{64}$/, { error: "must be 64 lowercase hexadecimal characters" });
 
 export const trailRecordSchema = z.object({
   format: z.literal(RECORD_FORMAT_ID, need(`"${RECORD_FORMAT_ID}"`)),
@@ -36,16 +44,21 @@ export const trailRecordSchema = z.object({
   }, need("an object with id and title")),
   exportedAt: z.iso.datetime(need("a UTC time like 2026-12-01T10:00:00.000Z")),
   events: z.array(trailEventSchema, need("a list of events")),
-  finalHash: z.string(need("text")).regex(/^[0-9a-f]{64}$/, { error: "must be 64 lowercase hexadecimal characters" }),
+  finalHash: hex64(),
+  head: z.object({
+    seq: z.number(need("a number")).int({ error: "must be a whole number" }).nonnegative({ error: "must be 0 or more" }),
+    hash: hex64(),
+  }, need("an object with seq and hash")).optional(),
 }, { error: "the file must hold one JSON object" });
 
 export function buildRecord(
   commission: { id: number; title: string },
   events: readonly TrailEvent[],
-  opts: { exportedAt?: Date | string } = {},
+  opts: { exportedAt?: Date | string; head?: TrailHead } = {},
 ): TrailRecord {
   const at = opts.exportedAt ?? new Date();
   return {
+    ...(opts.head ? { head: { seq: opts.head.seq, hash: opts.head.hash } } : {}),
     format: RECORD_FORMAT_ID,
     description: RECORD_FORMAT,
     commission: { id: commission.id, title: commission.title },
@@ -88,7 +101,18 @@ export function parseRecordText(text: string): ParseRecordResult {
   return parseRecord(value);
 }
 
-/** Verifies a parsed record in the browser against its commission id and stated final hash. */
-export function verifyRecordAsync(record: TrailRecord): Promise<VerifyResult> {
-  return verifyChainAsync(record.events, { expectedCommissionId: record.commission.id, expectedFinalHash: record.finalHash });
+/**
+ * What a record is checked against: its commission id, its stated final hash, the head stored with
+ * it (exactly), and optionally a head quoted elsewhere (a mail, the PDF) that it must reach.
+ */
+export function recordOptions(record: TrailRecord, quoted?: TrailHead): VerifyOptions {
+  const heads: HeadCheck[] = [];
+  if (record.head) heads.push({ ...record.head, exact: true, source: "the commission's head" });
+  if (quoted) heads.push({ ...quoted, source: "the head you gave" });
+  return { expectedCommissionId: record.commission.id, expectedFinalHash: record.finalHash, expectedHead: heads };
+}
+
+/** Verifies a parsed record in the browser (see recordOptions). */
+export function verifyRecordAsync(record: TrailRecord, quoted?: TrailHead): Promise<VerifyResult> {
+  return verifyChainAsync(record.events, recordOptions(record, quoted));
 }

@@ -1,6 +1,8 @@
 import { GENESIS_HASH, formatIssues, hashInput, trailEventSchema, type TrailEvent } from "./event";
+import type { TrailHead } from "./head";
 
-export type ChainFailureReason = "hash mismatch" | "gap" | "broken link" | "wrong commission" | "malformed";
+export type ChainFailureReason =
+  | "hash mismatch" | "gap" | "broken link" | "wrong commission" | "malformed" | "shortened" | "head mismatch";
 
 export type VerifyResult =
   | { ok: true; count: number; finalHash: string }
@@ -16,6 +18,19 @@ export type VerifyOptions = {
    * end cannot be detected: a shorter chain is still a consistent chain.
    */
   expectedFinalHash?: string;
+  /**
+   * A head the chain must reach: its event `seq` must exist and carry `hash`. The head held by the
+   * commission, or one quoted in a mail or the PDF. A chain that stops short of it was shortened;
+   * one whose event `seq` hashes differently was rewritten at or before that event.
+   */
+  expectedHead?: HeadCheck | readonly HeadCheck[];
+};
+
+export type HeadCheck = TrailHead & {
+  /** Whose head it is, for the messages: "the commission's head" unless told. */
+  source?: string;
+  /** The chain must end exactly at the head (true for the head stored with the chain). */
+  exact?: boolean;
 };
 
 type Failure = Extract<VerifyResult, { ok: false }>;
@@ -97,6 +112,11 @@ export function settleChain(plan: ChainPlan, mismatchAt: number, computed: strin
   if (plan.failure) return plan.failure;
   const count = plan.inputs.length;
   const finalHash = count > 0 ? plan.stated[count - 1] : GENESIS_HASH;
+  const heads = opts.expectedHead === undefined ? [] : Array.isArray(opts.expectedHead) ? opts.expectedHead : [opts.expectedHead];
+  for (const head of heads as HeadCheck[]) {
+    const headFailure = checkHead(plan.stated, head);
+    if (headFailure) return headFailure;
+  }
   if (opts.expectedFinalHash !== undefined && opts.expectedFinalHash !== finalHash) {
     return fail(
       count + 1,
@@ -105,4 +125,28 @@ export function settleChain(plan: ChainPlan, mismatchAt: number, computed: strin
     );
   }
   return { ok: true, count, finalHash };
+}
+
+const missing = (from: number, to: number) => (from === to ? `event ${from} is missing` : `events ${from}–${to} are missing`);
+
+/** The chain (its stated hashes, already checked) against a head it must reach. */
+function checkHead(stated: readonly string[], head: HeadCheck): Failure | null {
+  const source = head.source ?? "the commission's head";
+  const count = stated.length;
+  const ends = count === 0 ? "The record has no events" : `The record ends at event ${count}`;
+  if (count < head.seq) {
+    return fail(count + 1, "shortened", `${ends} but ${source} is event ${head.seq}: ${missing(count + 1, head.seq)}.`);
+  }
+  const at = head.seq > 0 ? stated[head.seq - 1] : GENESIS_HASH;
+  if (at !== head.hash) {
+    return fail(
+      Math.max(head.seq, 1),
+      "head mismatch",
+      `Event ${head.seq} of the record has the hash ${short(at)} but ${source} (event ${head.seq}) is ${short(head.hash)}: the chain was rewritten at or before event ${head.seq}.`,
+    );
+  }
+  if (head.exact && count > head.seq) {
+    return fail(head.seq + 1, "head mismatch", `${ends} but ${source} is event ${head.seq}: events after ${head.seq} were not appended by Placet.`);
+  }
+  return null;
 }

@@ -1,4 +1,6 @@
 import { eq } from "drizzle-orm";
+import mysql from "mysql2/promise";
+import { migratorUrl } from "@/db/urls";
 import { closeDb, databaseUrl, getDb } from "@/db/client";
 import { resetDatabase } from "@/db/reset";
 import { seedDemo } from "@/db/seed";
@@ -26,3 +28,14 @@ export async function viewer(email: string): Promise<Viewer> {
 }
 
 export { getDb, closeDb };
+
+/** Runs `fn` on a connection of the migrator's (DDL rights), for tests that play someone with database access. */
+export async function asMigrator<T>(fn: (conn: mysql.Connection) => Promise<T>): Promise<T> {
+  assertTestDatabase();
+  const conn = await mysql.createConnection({ uri: migratorUrl(databaseUrl()), timezone: "Z" });
+  try {
+    return await fn(conn);
+  } finally {
+    await conn.end();
+  }
+}

@@ -3,12 +3,12 @@ import { execFile } from "node:child_process";
 import { promisify } from "node:util";
 import { asc, eq, sql } from "drizzle-orm";
 import { closeDb, databaseUrl, getDb } from "@/db/client";
-import { commissionMembers, trailEvents } from "@/db/schema";
+import { commissionMembers, commissions, trailEvents } from "@/db/schema";
 import { appendTrail } from "@/lib/trail";
 import { exportRecord, loadChain } from "@/lib/dal/trail";
 import { NotFoundError } from "@/lib/errors";
 import { verifyChain, verifyRecord } from "@/models/trail/node-hash";
-import { freshDemo, viewer } from "./db";
+import { asMigrator, freshDemo, viewer } from "./db";
 
 const run = promisify(execFile);
 let ids: Awaited<ReturnType<typeof freshDemo>>;
@@ -17,11 +17,14 @@ afterAll(async () => { await closeDb(); });
 
 describe("the trail table is append-only", () => {
   const refusal = (p: Promise<unknown>) => p.then(() => "accepted", (e) => String(e?.cause?.message ?? e?.message));
-  it("the database refuses UPDATE", async () => {
-    expect(await refusal(getDb().execute(sql`UPDATE trail_events SET action = 'stage changed' WHERE commission_id = ${ids.commissionId}`))).toMatch(/append-only: UPDATE refused/);
+  it("the app's user may not UPDATE or DELETE it at all", async () => {
+    expect(await refusal(getDb().execute(sql`UPDATE trail_events SET action = 'stage changed' WHERE commission_id = ${ids.commissionId}`))).toMatch(/UPDATE command denied/);
+    expect(await refusal(getDb().execute(sql`DELETE FROM trail_events WHERE commission_id = ${ids.commissionId}`))).toMatch(/DELETE command denied/);
   });
-  it("the database refuses DELETE", async () => {
-    expect(await refusal(getDb().execute(sql`DELETE FROM trail_events WHERE commission_id = ${ids.commissionId}`))).toMatch(/append-only: DELETE refused/);
+  it("and the triggers refuse UPDATE and DELETE even to a user with those privileges", async () => {
+    const asM = (q: string) => asMigrator((c) => c.query(q, [ids.commissionId]));
+    expect(await refusal(asM("UPDATE trail_events SET action = 'stage changed' WHERE commission_id = ?"))).toMatch(/append-only: UPDATE refused/);
+    expect(await refusal(asM("DELETE FROM trail_events WHERE commission_id = ?"))).toMatch(/append-only: DELETE refused/);
     expect((await loadChain(ids.commissionId)).length).toBeGreaterThan(0);
   });
 });
@@ -75,12 +78,36 @@ describe("npm run trail:verify", () => {
     const env = { ...process.env, DATABASE_URL: databaseUrl() };
     const ok = await run("npx", ["tsx", "--conditions=react-server", "scripts/trail-verify.ts"], { env });
     expect(ok.stdout).toMatch(/chains hold/);
-    // Test-only: drop the guard in this throwaway database to simulate someone editing rows by hand.
-    await getDb().execute(sql`DROP TRIGGER trail_events_no_update`);
+    // Test-only: the migrator drops the guard in this throwaway database to simulate someone editing rows by hand.
     const [third] = await getDb().select().from(trailEvents).where(eq(trailEvents.commissionId, ids.commissionId)).orderBy(asc(trailEvents.seq)).limit(1).offset(2);
-    await getDb().execute(sql`UPDATE trail_events SET payload = ${JSON.stringify({ ...third.payload, role: "chair" })} WHERE id = ${third.id}`);
+    await asMigrator(async (c) => {
+      await c.query("DROP TRIGGER trail_events_no_update");
+      await c.query("UPDATE trail_events SET payload = ? WHERE id = ?", [JSON.stringify({ ...third.payload, role: "chair" }), third.id]);
+    });
     const bad = await run("npx", ["tsx", "--conditions=react-server", "scripts/trail-verify.ts"], { env }).catch((e) => e);
     expect(bad.code).toBe(1);
     expect(bad.stdout).toMatch(new RegExp(`FAIL\\s+commission ${ids.commissionId} .*seq 3: hash mismatch`));
   }, 60_000);
+});
+
+describe("migration 0007 on existing chains", () => {
+  it("backfills each commission's head with its chain's last event", async () => {
+    const { readFile } = await import("node:fs/promises");
+    const text = await readFile("db/migrations/0007_trail_head.sql", "utf8");
+    const backfill = text.split("--> statement-breakpoint")[1];
+    expect(backfill).toMatch(/UPDATE `commissions`/);
+    await asMigrator(async (c) => {
+      // As a database from before the head existed: every head at its default.
+      await c.query("DROP TRIGGER commissions_trail_head_forward");
+      await c.query("UPDATE commissions SET trail_head_seq = 0, trail_head_hash = REPEAT('0', 64)");
+      await c.query(backfill);
+    });
+    const rows = await getDb().select().from(commissions);
+    expect(rows.length).toBeGreaterThanOrEqual(2);
+    for (const row of rows) {
+      const chain = await loadChain(row.id);
+      const last = chain[chain.length - 1];
+      expect({ seq: row.trailHeadSeq, hash: row.trailHeadHash }).toEqual(last ? { seq: last.seq, hash: last.hash } : { seq: 0, hash: "0".repeat(64) });
+    }
+  });
 });

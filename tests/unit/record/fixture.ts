@@ -37,6 +37,7 @@ export function recordFixture(entries = 60): DecisionRecordDto {
     trail,
     finalHash: trail.length ? trail[trail.length - 1].hash : "0".repeat(64),
     lastSeq: trail.length,
+    head: { seq: trail.length, hash: trail.length ? trail[trail.length - 1].hash : "0".repeat(64) },
     formatId: RECORD_FORMAT_ID,
     formatDescription: RECORD_FORMAT,
     preparedAt: "2026-11-21T08:15:00.000Z",

@@ -7,6 +7,7 @@ import { Card } from "@/components/ui/card";
 import { CopyHash } from "@/components/copy-hash";
 import { buttonClass } from "@/components/ui/button";
 import { ROLE_LABELS } from "@/models/permissions/policy";
+import { formatHead } from "@/models/trail/head";
 
 export const metadata: Metadata = { title: "Decision trail" };
 
@@ -24,6 +25,10 @@ export default async function TrailPage({ params }: { params: Promise<{ commissi
           before it, so that no entry can be altered, removed or slipped in without the chain breaking.
         </p>
         {trail.finalHash && <p className="mb-3">Final hash now: <CopyHash hash={trail.finalHash} label="final hash" /></p>}
+        <p className="mb-3" data-testid="trail-head">
+          Trail head now: <span className="break-all font-mono text-sm">{formatHead(trail.head)}</span>
+          <span className="block text-sm text-ink-soft">Held by the commission and moved with every entry; a downloaded record must reach it.</span>
+        </p>
         <div className="flex flex-wrap gap-3">
           <a href={`/api/commissions/${c.id}/record.json`} className={buttonClass("secondary")} download>Download the record (JSON)</a>
           <a href={`/api/commissions/${c.id}/record.pdf`} className={buttonClass("secondary")} download>Download the decision record (PDF)</a>
