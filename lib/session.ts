@@ -2,18 +2,16 @@ import "server-only";
 import { cache } from "react";
 import { redirect } from "next/navigation";
 import { cookies } from "next/headers";
-import { auth } from "./auth";
 import { loadViewer, type Viewer } from "./dal/viewer";
 import { UnauthenticatedError } from "./errors";
+import { endSession, resolveSession, sessionCookie } from "./session-store";
 
 /** The signed-in person for this request, or null. Roles come from the database, not the session. */
 export const getViewer = cache(async (): Promise<Viewer | null> => {
-  const session = await auth();
-  const id = session?.user?.id;
-  if (!id) return null;
   const jar = await cookies();
-  const token = jar.get("__Secure-authjs.session-token")?.value ?? jar.get("authjs.session-token")?.value;
-  return loadViewer(id, token);
+  const session = await resolveSession(jar.get(sessionCookie().name)?.value);
+  if (!session) return null;
+  return loadViewer(session.userId, session.id);
 });
 
 /** For route handlers and actions: the viewer, or a 401. */
@@ -28,4 +26,12 @@ export async function viewerOrSignIn(next?: string): Promise<Viewer> {
   const v = await getViewer();
   if (!v) redirect(next ? `/sign-in?next=${encodeURIComponent(next)}` : "/sign-in");
   return v;
+}
+
+/** Ends this browser's session and removes its cookie (for server actions). */
+export async function signOutHere(): Promise<void> {
+  const jar = await cookies();
+  const { name, options } = sessionCookie();
+  await endSession(jar.get(name)?.value);
+  jar.set(name, "", { ...options, maxAge: 0 });
 }
