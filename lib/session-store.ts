@@ -11,22 +11,40 @@ import { sha256 } from "./keyed-hash";
  * Server-side sessions. The browser holds a random 256-bit value (OWASP ASVS 4.0.3 V3.2.2); the
  * database holds only its SHA-256, so a copy of the table signs nobody in.
  */
-export interface ActiveSession { id: string; userId: string; createdAt: Date }
+export interface ActiveSession { id: string; userId: string; createdAt: Date; expires: Date }
 
 export const sessionLimits = (): SessionLimits => ({ absoluteSeconds: env.sessionAbsoluteSeconds, idleSeconds: env.sessionIdleSeconds });
 
 /** The stored key for a cookie's value. */
 export const sessionIdFor = (cookieValue: string) => sha256(`session:${cookieValue}`);
 
-/** Starts a session for `userId`; returns the value for the cookie (never stored as is). */
+/** Stores a session whose cookie holds `value`; returns when it ends if nothing more happens. */
+export async function storeSession(value: string, userId: string, userAgent: string, now = new Date()): Promise<Date> {
+  const times = { createdAt: now, lastSeenAt: now };
+  const expires = sessionExpiresAt(times, sessionLimits());
+  await getDb().insert(sessions).values({ sessionToken: sessionIdFor(value), userId, ...times, expires, userAgent: userAgent.slice(0, 255) });
+  return expires;
+}
+
+/** Starts a session for `userId` directly (tests and tools); returns the value for the cookie. */
 export async function createSession(userId: string, userAgent: string, now = new Date()): Promise<string> {
   const value = randomBytes(32).toString("base64url");
-  const times = { createdAt: now, lastSeenAt: now };
-  await getDb().insert(sessions).values({
-    sessionToken: sessionIdFor(value), userId, ...times,
-    expires: sessionExpiresAt(times, sessionLimits()), userAgent: userAgent.slice(0, 255),
-  });
+  await storeSession(value, userId, userAgent, now);
   return value;
+}
+
+/** Records the browser a new session was made from (Auth.js creates the row without it). */
+export async function noteUserAgent(value: string, userAgent: string): Promise<void> {
+  await getDb().update(sessions).set({ userAgent: userAgent.slice(0, 255) }).where(eq(sessions.sessionToken, sessionIdFor(value)));
+}
+
+/** Moves a live session's idle deadline on from now (never past its absolute one). */
+export async function touchSession(value: string, now = new Date()): Promise<ActiveSession | null> {
+  const s = await resolveSession(value, now);
+  if (!s) return null;
+  const expires = sessionExpiresAt({ createdAt: s.createdAt, lastSeenAt: now }, sessionLimits());
+  await getDb().update(sessions).set({ lastSeenAt: now, expires }).where(eq(sessions.sessionToken, s.id));
+  return { ...s, expires };
 }
 
 /**
@@ -47,9 +65,11 @@ export async function resolveSession(cookieValue: string | undefined, now = new 
     }
     if (needsTouch(row.lastSeenAt, now)) {
       const times = { createdAt: row.createdAt, lastSeenAt: now };
-      await db.update(sessions).set({ lastSeenAt: now, expires: sessionExpiresAt(times, limits) }).where(eq(sessions.sessionToken, id));
+      const expires = sessionExpiresAt(times, limits);
+      await db.update(sessions).set({ lastSeenAt: now, expires }).where(eq(sessions.sessionToken, id));
+      return { id, userId: row.userId, createdAt: row.createdAt, expires };
     }
-    return { id, userId: row.userId, createdAt: row.createdAt };
+    return { id, userId: row.userId, createdAt: row.createdAt, expires: row.expires };
   });
 }
 

@@ -4,14 +4,16 @@ import { redirect } from "next/navigation";
 import { cookies } from "next/headers";
 import { loadViewer, type Viewer } from "./dal/viewer";
 import { UnauthenticatedError } from "./errors";
-import { endSession, resolveSession, sessionCookie } from "./session-store";
+import { auth, signOut } from "./auth";
+import { sessionCookie, sessionIdFor } from "./session-store";
 
 /** The signed-in person for this request, or null. Roles come from the database, not the session. */
 export const getViewer = cache(async (): Promise<Viewer | null> => {
-  const jar = await cookies();
-  const session = await resolveSession(jar.get(sessionCookie().name)?.value);
-  if (!session) return null;
-  return loadViewer(session.userId, session.id);
+  const session = await auth();
+  const userId = session?.user?.id;
+  if (!userId) return null;
+  const value = (await cookies()).get(sessionCookie().name)?.value;
+  return loadViewer(userId, value ? sessionIdFor(value) : undefined);
 });
 
 /** For route handlers and actions: the viewer, or a 401. */
@@ -30,8 +32,5 @@ export async function viewerOrSignIn(next?: string): Promise<Viewer> {
 
 /** Ends this browser's session and removes its cookie (for server actions). */
 export async function signOutHere(): Promise<void> {
-  const jar = await cookies();
-  const { name, options } = sessionCookie();
-  await endSession(jar.get(name)?.value);
-  jar.set(name, "", { ...options, maxAge: 0 });
+  await signOut({ redirect: false });
 }
