@@ -7,7 +7,7 @@ import { emailSchema } from "@/models/schemas/people";
 import { env } from "./env";
 import { keyedHash, serverSecret, sha256 } from "./keyed-hash";
 import { enqueueMail } from "./outbox";
-import { SIGN_IN_LINKS_PER_ADDRESS, SIGN_IN_LINKS_PER_IP, takeSlot } from "./rate-limit";
+import { pruneCounters, SIGN_IN_LINKS_PER_ADDRESS, SIGN_IN_LINKS_PER_IP, takeSlot } from "./rate-limit";
 import { logSecurity } from "./security-log";
 import { createSession } from "./session-store";
 
@@ -45,6 +45,7 @@ export async function requestSignInLink(req: { email: string; ip: string; next: 
   const addressOk = await takeSlot("address", email, SIGN_IN_LINKS_PER_ADDRESS, now);
   const db = getDb();
   await db.delete(verificationTokens).where(lt(verificationTokens.expires, now));
+  await pruneCounters(now);
   const [user] = await db.select({ id: users.id, email: users.email }).from(users).where(eq(users.email, email)).limit(1);
   if (!user || !sameBytes(user.email, email)) {
     await logSecurity({ userId: null, email: null, action: "sign-in refused: not invited", detail: { addressHash: keyedHash("log", email) } });
