@@ -13,7 +13,7 @@ import { placetAdapter } from "./auth-adapter";
 import { env } from "./env";
 import { keyedHash, serverSecret } from "./keyed-hash";
 import { enqueueMail } from "./outbox";
-import { SIGN_IN_LINKS_PER_ADDRESS, SIGN_IN_LINKS_PER_IP, takeSlot } from "./rate-limit";
+import { pruneCounters, SIGN_IN_LINKS_PER_ADDRESS, SIGN_IN_LINKS_PER_IP, takeSlot } from "./rate-limit";
 import { logSecurity } from "./security-log";
 import { noteUserAgent, sessionCookie } from "./session-store";
 
@@ -119,6 +119,7 @@ export async function requestSignInLink(req: { email: string; ip: string; next: 
   const ipOk = await takeSlot("ip", req.ip, SIGN_IN_LINKS_PER_IP, now);
   const addressOk = await takeSlot("address", email, SIGN_IN_LINKS_PER_ADDRESS, now);
   await getDb().delete(verificationTokens).where(lt(verificationTokens.expires, now));
+  await pruneCounters(now);
   const user = await invited(email);
   if (!user) {
     await logSecurity({ userId: null, email: null, action: "sign-in refused: not invited", detail: { addressHash: keyedHash("log", email) } });

@@ -2,7 +2,9 @@
 ROOT="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
 export ROOT
 # Local overrides (ports, a second checkout beside this one): .ports.local is never committed.
-[ -f "$ROOT/.ports.local" ] && source "$ROOT/.ports.local"
+# Loaded once: a script that sourced this file and then exported other ports (test.sh for e2e) keeps them
+# when a script it runs (mail.sh) sources this file again.
+if [ -f "$ROOT/.ports.local" ] && [ -z "${PLACET_PORTS_LOADED:-}" ]; then source "$ROOT/.ports.local"; export PLACET_PORTS_LOADED=1; fi
 export DATA_DIR="${DATA_DIR:-$ROOT/.data}"
 export DB_PORT="${DB_PORT:-3307}"
 export DB_NAME="${DB_NAME:-placet}"

@@ -9,7 +9,6 @@ export const metadata: Metadata = { title: "Sign in" };
 
 const ERRORS: Record<string, string> = {
   Verification: "That sign-in link has expired or has already been used. Links work once, for 10 minutes. Ask for a new one below.",
-  Unavailable: "The sign-in link could not be sent just now. Please try again in a minute.",
 };
 
 type Params = { error?: string; next?: string; email?: string };

@@ -1,3 +1,4 @@
+import { after } from "next/server";
 import { requestSignInLink } from "@/lib/auth";
 import { clientIp, fromOurPages } from "@/lib/request-info";
 import { safeNext } from "@/lib/safe-next";
@@ -10,7 +11,7 @@ const seeOther = (location: string) => new Response(null, { status: 303, headers
 
 /**
  * The sign-in form posts here (the only way to ask for a link). Invited, unknown and rate-limited
- * addresses all get the same 303 to the check-your-inbox page; only a malformed address comes back to
+ * addresses all get the same 303 to the check-your-inbox page, at the same speed; only a malformed address comes back to
  * the form, with its message beside the field.
  */
 export async function POST(req: Request) {
@@ -25,11 +26,15 @@ export async function POST(req: Request) {
     if (next !== "/commissions") back.set("next", next);
     return seeOther(`/sign-in?${back}`);
   }
-  try {
-    await requestSignInLink({ email: parsed.data.email, ip: clientIp(req.headers), next });
-  } catch (err) {
-    console.error("sign-in link could not be queued", err);
-    return seeOther("/sign-in?error=Unavailable");
-  }
+  // The answer goes out before any lookup, so how long it takes says nothing about the address; the
+  // limits, the lookup and the queued mail happen just after it.
+  const request = { email: parsed.data.email, ip: clientIp(req.headers), next };
+  after(async () => {
+    try {
+      await requestSignInLink(request);
+    } catch (err) {
+      console.error("sign-in link could not be queued", err);
+    }
+  });
   return seeOther("/sign-in/check-inbox");
 }
