@@ -17,6 +17,8 @@ export default defineConfig({
           name: "integration",
           include: ["tests/integration/**/*.test.ts"],
           environment: "node",
+          // next-auth imports "next/server" without an extension; inlined, Vite resolves it.
+          server: { deps: { inline: ["next-auth"] } },
           fileParallelism: false,
           testTimeout: 60_000,
           hookTimeout: 60_000,

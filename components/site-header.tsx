@@ -15,7 +15,7 @@ export async function SiteHeader() {
             <Link href="/commissions" className="py-2 text-ink-soft hover:text-ink">Commissions</Link>
             {viewer.studios.length > 0 && <Link href="/studio" className="py-2 text-ink-soft hover:text-ink">Studio</Link>}
             <Link href="/verify" className="hidden py-2 text-ink-soft hover:text-ink sm:inline">Verify a record</Link>
-            <span className="hidden text-ink-soft sm:inline" data-testid="signed-in-as">{viewer.name}</span>
+            <Link href="/account/devices" className="hidden py-2 text-ink-soft hover:text-ink sm:inline" data-testid="signed-in-as" title="Signed-in devices">{viewer.name}</Link>
             <form action={signOutAction}>
               <button className="min-h-11 rounded-md px-3 text-ink-soft underline-offset-2 hover:underline">Sign out</button>
             </form>

@@ -23,6 +23,8 @@ export { ATTACHMENT_KINDS, COMMITTEE_ROLES, DECISION_OUTCOMES, REVISION_STATES, 
 const now = () => utc("created_at").notNull().default(sql`CURRENT_TIMESTAMP(3)`);
 
 // --- Auth.js tables (shape required by @auth/drizzle-adapter) ---------------------------------
+// users.email and verification_tokens.identifier are utf8mb4_bin (migration 0005): byte-for-byte
+// comparison, so an accented or differently cased look-alike never matches an invited address.
 export const users = mysqlTable("users", {
   id: varchar("id", { length: 255 }).primaryKey().$defaultFn(() => crypto.randomUUID()),
   name: varchar("name", { length: 255 }),
@@ -48,12 +50,15 @@ export const accounts = mysqlTable("accounts", {
   session_state: varchar("session_state", { length: 255 }),
 }, (t) => [primaryKey({ columns: [t.provider, t.providerAccountId] })]);
 
+/** sessionToken holds the SHA-256 of the cookie's value, never the value itself. */
 export const sessions = mysqlTable("sessions", {
   sessionToken: varchar("sessionToken", { length: 255 }).primaryKey(),
   userId: varchar("userId", { length: 255 }).notNull().references(() => users.id, { onDelete: "cascade" }),
   expires: timestamp("expires", { mode: "date" }).notNull(),
   createdAt: now(),
-});
+  lastSeenAt: utc("last_seen_at").notNull().default(sql`CURRENT_TIMESTAMP(3)`),
+  userAgent: varchar("user_agent", { length: 255 }).notNull().default(""),
+}, (t) => [index("sessions_user").on(t.userId)]);
 
 export const verificationTokens = mysqlTable("verification_tokens", {
   identifier: varchar("identifier", { length: 255 }).notNull(),
@@ -137,6 +142,16 @@ export const securityLog = mysqlTable("security_log", {
   action: varchar("action", { length: 60 }).notNull(),
   detail: json<Record<string, unknown>>("detail").notNull(),
 }, (t) => [index("security_log_user").on(t.userId)]);
+
+/**
+ * Sign-in link requests per key (a keyed hash of an address or a client IP) per fixed window, counted
+ * by INSERT … ON DUPLICATE KEY UPDATE so parallel requests never read a stale count.
+ */
+export const signInCounters = mysqlTable("sign_in_counters", {
+  keyHash: varchar("key_hash", { length: 80 }).notNull(),
+  windowStart: utc("window_start").notNull(),
+  n: int("n").notNull().default(0),
+}, (t) => [primaryKey({ columns: [t.keyHash, t.windowStart] })]);
 
 // --- Outbox: mail written in the same transaction as the change, sent by a worker with retries -----
 export const outbox = mysqlTable("outbox", {

@@ -10,4 +10,8 @@ export const env = {
   signInLinkSeconds: 10 * 60,
   /** Chair re-confirms identity before signing a decision when signed in longer ago than this. */
   freshSignInSeconds: 10 * 60,
+  /** A session ends this long after sign-in, however active (OWASP ASVS 4.0.3 V3.3.2). */
+  sessionAbsoluteSeconds: Number(process.env.PLACET_SESSION_ABSOLUTE_HOURS ?? 12) * 3600,
+  /** A session ends after this long without a request (OWASP ASVS 4.0.3 V3.3.2). */
+  sessionIdleSeconds: Number(process.env.PLACET_SESSION_IDLE_MINUTES ?? 30) * 60,
 };

@@ -2,19 +2,23 @@ import type { Metadata } from "next";
 import { redirect } from "next/navigation";
 import { getViewer } from "@/lib/session";
 import { Card } from "@/components/ui/card";
+import { fieldErrors, signInSchema } from "@/models/schemas/people";
 import { SignInForm } from "./sign-in-form";
 
 export const metadata: Metadata = { title: "Sign in" };
 
 const ERRORS: Record<string, string> = {
   Verification: "That sign-in link has expired or has already been used. Links work once, for 10 minutes. Ask for a new one below.",
-  AccessDenied: "That address has not been invited to Placet. Ask the studio or your committee's chair to invite you.",
-  Configuration: "Sign-in is not working on the server just now. Please try again shortly.",
 };
 
-export default async function SignInPage({ searchParams }: { searchParams: Promise<{ error?: string; next?: string }> }) {
-  const { error, next } = await searchParams;
+type Params = { error?: string; next?: string; email?: string };
+
+export default async function SignInPage({ searchParams }: { searchParams: Promise<Params> }) {
+  const { error, next, email } = await searchParams;
   if (await getViewer()) redirect("/commissions");
+  // A malformed address comes back here: the same schema says what is wrong with it, beside the field.
+  const parsed = email === undefined ? null : signInSchema.safeParse({ email });
+  const fieldError = parsed && !parsed.success ? fieldErrors(parsed.error).email : undefined;
   return (
     <div className="mx-auto max-w-md">
       <h1 className="mb-2 text-3xl font-semibold">Sign in</h1>
@@ -24,7 +28,7 @@ export default async function SignInPage({ searchParams }: { searchParams: Promi
           {ERRORS[error] ?? ERRORS.Verification}
         </p>
       )}
-      <Card><SignInForm next={next} /></Card>
+      <Card><SignInForm next={next} email={email} error={fieldError} /></Card>
     </div>
   );
 }

@@ -13,11 +13,11 @@ export interface Viewer {
   units: "mm" | "in";
   notices: "immediate" | "digest";
   studios: { studioId: number; studioName: string; role: StudioRole }[];
-  /** The session this request came with (from its cookie), when known. */
-  sessionToken?: string;
+  /** The stored id of the session this request came with (from its cookie), when known. */
+  sessionId?: string;
 }
 
-export async function loadViewer(userId: string, sessionToken?: string): Promise<Viewer | null> {
+export async function loadViewer(userId: string, sessionId?: string): Promise<Viewer | null> {
   return withRetry(async () => {
     const db = getDb();
     const [u] = await db.select().from(users).where(eq(users.id, userId)).limit(1);
@@ -27,22 +27,23 @@ export async function loadViewer(userId: string, sessionToken?: string): Promise
       .from(studioMembers)
       .innerJoin(studios, eq(studios.id, studioMembers.studioId))
       .where(eq(studioMembers.userId, userId));
-    return { id: u.id, email: u.email, name: u.name ?? u.email, units: u.units, notices: u.notices, studios: rows, sessionToken };
+    return { id: u.id, email: u.email, name: u.name ?? u.email, units: u.units, notices: u.notices, studios: rows, sessionId };
   });
 }
 
 /**
- * When the viewer's current session began (for the chair's fresh sign-in before signing a decision):
- * the session of this request when its token is known, so an old session elsewhere never counts as fresh.
+ * When the viewer's current session began (for the chair's fresh sign-in before signing a decision).
+ * Only this request's own session counts (OWASP ASVS 4.0.3 V3.7.1): a viewer with no known or an
+ * unknown session id is never fresh, and a newer session on another device never helps.
  */
-export async function sessionStartedAt(viewer: Pick<Viewer, "id" | "sessionToken">): Promise<Date | null> {
-  const db = getDb();
-  const where = viewer.sessionToken
-    ? and(eq(sessions.userId, viewer.id), eq(sessions.sessionToken, viewer.sessionToken))
-    : eq(sessions.userId, viewer.id);
-  const rows = await db.select({ createdAt: sessions.createdAt }).from(sessions).where(where);
-  if (!rows.length) return null;
-  return rows.reduce((a, b) => (a.createdAt > b.createdAt ? a : b)).createdAt;
+export async function sessionStartedAt(viewer: Pick<Viewer, "id" | "sessionId">): Promise<Date | null> {
+  if (!viewer.sessionId) return null;
+  const [row] = await getDb()
+    .select({ createdAt: sessions.createdAt })
+    .from(sessions)
+    .where(and(eq(sessions.userId, viewer.id), eq(sessions.sessionToken, viewer.sessionId)))
+    .limit(1);
+  return row?.createdAt ?? null;
 }
 
 export function requireStudio(viewer: Viewer, studioId?: number) {

@@ -1,10 +1,15 @@
 import { z } from "zod";
 
+/**
+ * The one normalisation of an e-mail address: trimmed, ASCII only (checked before lower-casing, which
+ * could turn a non-ASCII letter into an ASCII one), lower-cased, at most 254 characters.
+ */
 export const emailSchema = z
   .string({ error: "Enter an e-mail address." })
   .trim()
-  .toLowerCase()
   .min(1, "Enter an e-mail address.")
+  .regex(/^[\x21-\x7e]+$/, "Use the e-mail address with plain letters only (no accents, other alphabets or spaces).")
+  .toLowerCase()
   .max(254, "That e-mail address is too long.")
   .pipe(z.email({ error: "Enter an e-mail address like name@example.org." }));
 

@@ -1,7 +1,7 @@
 import { eq, sql } from "drizzle-orm";
 import { ballots, decisions, sessions, trailEvents, users, votes } from "@/db/schema";
 import { createDraft, updateDraft, circulate } from "@/lib/dal/revisions-write";
-import { getDb, viewer } from "./db";
+import { getDb, testSessionId, viewer } from "./db";
 
 export const PEOPLE = {
   owner: "tamsin@hollowmere.test",
@@ -46,7 +46,7 @@ export async function signedIn(email: string, minutesAgo: number) {
   const [u] = await getDb().select().from(users).where(eq(users.email, email));
   await getDb().delete(sessions).where(eq(sessions.userId, u.id));
   await getDb().insert(sessions).values({
-    sessionToken: crypto.randomUUID(), userId: u.id, expires: new Date(Date.now() + 24 * 3600_000),
+    sessionToken: testSessionId(u.id), userId: u.id, expires: new Date(Date.now() + 24 * 3600_000),
     createdAt: new Date(Date.now() - minutesAgo * 60_000),
   });
 }

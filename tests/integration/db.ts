@@ -21,10 +21,13 @@ export async function freshDemo(opts: { revisions?: boolean } = {}) {
   return seedDemo({ revisions: opts.revisions ?? false });
 }
 
+/** The session id a test viewer carries; `signedIn()` (ballot-helpers) stores a session under it. */
+export const testSessionId = (userId: string) => `test-session-${userId}`;
+
 export async function viewer(email: string): Promise<Viewer> {
   const [u] = await getDb().select().from(users).where(eq(users.email, email));
   if (!u) throw new Error(`no user ${email}`);
-  return (await loadViewer(u.id))!;
+  return (await loadViewer(u.id, testSessionId(u.id)))!;
 }
 
 export { getDb, closeDb };

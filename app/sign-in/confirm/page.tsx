@@ -9,7 +9,7 @@ export const metadata: Metadata = { title: "Confirm sign-in" };
  * do); the button posts, and only then is the one-time link used.
  */
 export default async function ConfirmPage({ searchParams }: { searchParams: Promise<Record<string, string | undefined>> }) {
-  const { token, email, callbackUrl } = await searchParams;
+  const { token, email, next } = await searchParams;
   if (!token || !email) {
     return (
       <div className="mx-auto max-w-md">
@@ -26,7 +26,7 @@ export default async function ConfirmPage({ searchParams }: { searchParams: Prom
         <form method="post" action="/sign-in/confirm/complete">
           <input type="hidden" name="token" value={token} />
           <input type="hidden" name="email" value={email} />
-          <input type="hidden" name="callbackUrl" value={callbackUrl ?? ""} />
+          <input type="hidden" name="next" value={next ?? ""} />
           <button type="submit" className={buttonClass("primary", "w-full")}>Sign in</button>
         </form>
         <p className="mt-4 text-sm text-ink-soft">Not you? Close this page; nothing has happened yet.</p>

@@ -1,20 +1,34 @@
+import { completeSignIn } from "@/lib/auth";
 import { env } from "@/lib/env";
+import { fromOurPages } from "@/lib/request-info";
 import { safeNext } from "@/lib/safe-next";
+import { endSession, sessionCookie, setCookieHeader } from "@/lib/session-store";
 
-/** The confirm button posts here; we hand the one-time token to Auth.js, which checks and uses it up. */
+export const dynamic = "force-dynamic";
+
+const seeOther = (location: string, cookie?: string) => {
+  const headers = new Headers({ location, "cache-control": "no-store" });
+  if (cookie) headers.append("set-cookie", cookie);
+  return new Response(null, { status: 303, headers });
+};
+
+function cookieFrom(req: Request, name: string): string | undefined {
+  const pair = (req.headers.get("cookie") ?? "").split(/;\s*/).find((c) => c.startsWith(`${name}=`));
+  return pair?.slice(name.length + 1);
+}
+
+/**
+ * The confirm page's button posts here; the one-time link is used up and a new session begins. Any
+ * session this browser had is ended first, so a sign-in always gets a new token (OWASP ASVS 4.0.3 V3.2.1).
+ */
 export async function POST(req: Request) {
+  if (!fromOurPages(req)) return new Response("This form only works from Placet's own pages.", { status: 403 });
   const form = await req.formData().catch(() => null);
   const token = String(form?.get("token") ?? "");
   const email = String(form?.get("email") ?? "");
-  if (!token || !email) return Response.redirect(new URL("/sign-in?error=Verification", env.appUrl), 303);
-  const cb = String(form?.get("callbackUrl") ?? "");
-  let next = "/commissions";
-  try {
-    next = safeNext(cb.startsWith("http") ? new URL(cb).pathname + new URL(cb).search : cb);
-  } catch { /* keep the default */ }
-  const target = new URL("/api/auth/callback/nodemailer", env.appUrl);
-  target.searchParams.set("token", token);
-  target.searchParams.set("email", email);
-  target.searchParams.set("callbackUrl", new URL(next, env.appUrl).toString());
-  return Response.redirect(target, 303);
+  const next = safeNext(String(form?.get("next") ?? ""));
+  const done = await completeSignIn({ token, email, userAgent: req.headers.get("user-agent") ?? "" });
+  if (!done) return seeOther("/sign-in?error=Verification");
+  await endSession(cookieFrom(req, sessionCookie().name));
+  return seeOther(next, setCookieHeader(done.cookie, env.sessionAbsoluteSeconds));
 }
