@@ -33,12 +33,23 @@ export async function discoverRoutes(): Promise<{ file: string; method: string }
   return found;
 }
 
+const startsWithUseServer = (f: string) =>
+  /^["']use server["']/.test(readFileSync(f, "utf8").replace(/^(\s|\/\/[^\n]*\n|\/\*[\s\S]*?\*\/)*/, ""));
+
+/**
+ * Files that declare a server action inside a function ("use server" in its body). The matrix cannot call
+ * those from outside, so they are listed to fail the test: keep actions in "use server" files beside the route.
+ */
+export function inlineServerActions(): string[] {
+  return [...sourceFiles("app"), ...sourceFiles("components")]
+    .filter((f) => /["']use server["']/.test(readFileSync(f, "utf8")) && !startsWithUseServer(f)).map(rel);
+}
+
 /** Every server action: the exported async functions of each file under app/ that starts with "use server". */
 export async function discoverActions(): Promise<{ file: string; name: string }[]> {
   const found: { file: string; name: string }[] = [];
   for (const f of sourceFiles("app")) {
-    const head = readFileSync(f, "utf8").replace(/^(\s|\/\/[^\n]*\n|\/\*[\s\S]*?\*\/)*/, "");
-    if (!/^["']use server["']/.test(head)) continue;
+    if (!startsWithUseServer(f)) continue;
     const mod = await import(/* @vite-ignore */ f);
     for (const [name, v] of Object.entries(mod)) if (typeof v === "function") found.push({ file: rel(f), name });
   }

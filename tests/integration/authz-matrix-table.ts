@@ -96,6 +96,10 @@ export const TABLE: Row[] = [
   r("api/revisions/[revisionId]/ballot", "POST", "freshCirculated", CHAIR, { body: () => ({ closesAt: inHours(48) }) }),
   r("api/revisions/[revisionId]/comments", "GET", "readable", VIEW),
   r("api/revisions/[revisionId]/comments", "POST", "current", PEOPLE, { body: () => ({ body: "Is the rim height measured from the floor?" }) }),
+  // A pin on a picture of another commission, named by its id in the body: refused as bad input, nothing written.
+  r("api/revisions/[revisionId]/comments", "POST", "current", "401 404 422 422 422 422 422 422", {
+    body: (o) => ({ body: "Here.", target: { kind: "attachment", attachmentId: o.elsewhereAttachmentId, selector: "xywh=percent:10,10,20,20" } }),
+  }),
   r("api/revisions/[revisionId]/decision", "GET", "readable", VIEW),
   r("api/revisions/[revisionId]/decision", "POST", "freshCirculated", CHAIR, { body: decision }),
   r("api/revisions/[revisionId]/decision/sign-in-link", "POST", "current", CHAIR),
@@ -114,6 +118,9 @@ export const TABLE: Row[] = [
     (fn, o) => fn(o.commissionId, {}, form({ email: `adviser-${uniq()}@stwenna.test`, name: "A new adviser", role: "adviser" }))),
   a("commissions/[commissionId]/people/actions.ts", "inviteAction", "freshCommission", "401 404 403 403 403 403 ok ok",
     (fn, o) => fn(o.commissionId, {}, form({ email: `member-${uniq()}@stwenna.test`, name: "A new member", role: "member" }))),
+  // Inviting a member again as an adviser would take away their vote: the chair may invite advisers, not demote.
+  a("commissions/[commissionId]/people/actions.ts", "inviteAction", "freshCommission", "401 404 403 403 403 403 ok ok",
+    (fn, o) => fn(o.commissionId, {}, form({ email: "david@stwenna.test", name: "David Osei", role: "adviser" }))),
   a("commissions/[commissionId]/revisions/[number]/ballot-actions.ts", "openBallotAction", "freshCirculated", CHAIR, (fn, o) => fn(o.revisionId, { closesAt: inHours(48) })),
   a("commissions/[commissionId]/revisions/[number]/ballot-actions.ts", "castVoteAction", "openBallot", VOTERS, (fn, o) => fn(o.ballotId, "against")),
   a("commissions/[commissionId]/revisions/[number]/ballot-actions.ts", "closeBallotAction", "freshOpenBallot", CHAIR, (fn, o) => fn(o.ballotId)),

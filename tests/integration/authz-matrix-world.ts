@@ -51,6 +51,8 @@ interface Side {
   committee: { email: string; name: string; role: "chair" | "member" | "adviser"; treasurer: boolean }[];
   /** A circulated revision with a file and a comment thread, for reading (superseded later; still readable). */
   readable: { revisionId: number; attachmentId: number; commentId: number };
+  /** A picture on the other side's commission, to name in a body where this side's id belongs. */
+  elsewhereAttachmentId: number;
 }
 export type Sides = { own: Side; foreign: Side };
 export type SideName = keyof Sides;
@@ -75,9 +77,12 @@ export async function buildWorld(): Promise<Sides> {
       { email: ROLES.treasurer, name: "Colin Marsh", role: "member", treasurer: true },
       { email: ROLES.adviser, name: "Dr Priya Nandakumar", role: "adviser", treasurer: false },
     ],
-    readable: { revisionId: rev2.id, attachmentId: att.id, commentId: com.id },
+    readable: { revisionId: rev2.id, attachmentId: att.id, commentId: com.id }, elsewhereAttachmentId: 0,
   };
-  return { own, foreign: await buildForeign() };
+  const foreign = await buildForeign();
+  own.elsewhereAttachmentId = foreign.readable.attachmentId;
+  foreign.elsewhereAttachmentId = own.readable.attachmentId;
+  return { own, foreign };
 }
 
 async function buildForeign(): Promise<Side> {
@@ -94,7 +99,7 @@ async function buildForeign(): Promise<Side> {
   await updateRules(designer, commissionId, DEMO_RULES);
   const side: Side = {
     commissionId, designer, chair: await viewer(FOREIGN_COMMITTEE[0].email), member: await viewer(FOREIGN_COMMITTEE[1].email),
-    committee: FOREIGN_COMMITTEE, readable: { revisionId: 0, attachmentId: 0, commentId: 0 },
+    committee: FOREIGN_COMMITTEE, readable: { revisionId: 0, attachmentId: 0, commentId: 0 }, elsewhereAttachmentId: 0,
   };
   const revisionId = await draftId(side);
   const attachmentId = (await addAttachment(designer, revisionId, { name: "elevation.png", bytes: await png(), caption: "Elevation" })).id;
@@ -138,14 +143,14 @@ async function openBallotOn(side: Side, revisionId: number): Promise<number> {
 }
 
 /** What a factory hands a row: the ids its URL or arguments need. */
-export interface Obj { commissionId: number; revisionId: number; number: number; attachmentId: number; commentId: number; ballotId: number }
+export interface Obj { commissionId: number; revisionId: number; number: number; attachmentId: number; commentId: number; ballotId: number; elsewhereAttachmentId: number }
 
 async function numberOf(revisionId: number) {
   const [r] = await getDb().select({ number: revisions.number }).from(revisions).where(eq(revisions.id, revisionId));
   return r.number;
 }
 const obj = async (side: Side, o: Partial<Obj>): Promise<Obj> => ({
-  commissionId: side.commissionId, revisionId: 0, attachmentId: 0, commentId: 0, ballotId: 0, ...o,
+  commissionId: side.commissionId, revisionId: 0, attachmentId: 0, commentId: 0, ballotId: 0, elsewhereAttachmentId: side.elsewhereAttachmentId, ...o,
   number: o.revisionId ? await numberOf(o.revisionId) : 0,
 });
 
