@@ -69,12 +69,12 @@ export function cookieHeader(jar: Jar): string {
 }
 
 /** Signs the person in as an e-mail link would leave them: a fresh database session; returns its token. */
-export async function startSession(email: string): Promise<string> {
+export async function startSession(email: string, expires?: Date): Promise<string> {
   const [u] = await getDb().select().from(users).where(eq(users.email, email));
   if (!u) throw new Error(`no user ${email}`);
   const token = crypto.randomUUID();
   // Thirty days ahead, as Auth.js sets it, so looking the session up does not extend (rewrite) it.
-  await getDb().insert(sessions).values({ sessionToken: token, userId: u.id, expires: new Date(Date.now() + 30 * 24 * 3600_000), createdAt: new Date() });
+  await getDb().insert(sessions).values({ sessionToken: token, userId: u.id, expires: expires ?? new Date(Date.now() + 30 * 24 * 3600_000), createdAt: new Date() });
   return token;
 }
 export async function endSession(token: string) {

@@ -21,6 +21,7 @@ const VIEW =     "401       404      ok      ok     ok        ok    ok       ok"
 const SIGNED =   "401       ok       ok      ok     ok        ok    ok       ok";
 const PUBLIC =   "ok        ok       ok      ok     ok        ok    ok       ok";
 const DRAFT =    "401       404      404     404    404       404   ok       ok"; // drafts are the studio's alone
+const DRAFT_CHAIR_ONLY = "401 404 404 404 404 404 403 403"; // chair's steps on a draft: not found to the committee
 const STUDIO =   "401       404      403     403    403       403   ok       ok";
 const CHAIR =    "401       404      403     403    403       ok    403      403";
 const VOTERS =   "401       404      403     ok     ok        403   403      403"; // the demo's rules: the chair does not vote
@@ -37,6 +38,8 @@ export interface Row {
   foreign?: Partial<Record<Role, string>>;
   /** Outcomes that must leave every table unchanged even though they are not refusals. */
   unchangedAlways?: boolean;
+  /** For an allowed answer: what in its body would be a leak (a problem in words), or null. */
+  inspect?: (body: string, c: { role: Role | "expired"; email: string | null; own: number; foreign: number }) => string | null;
   /** Routes: the URL (default: the file's path with the object's ids), params, and a JSON body or a form. */
   url?: string;
   params?: Record<string, string | string[]>;
@@ -64,14 +67,30 @@ const decision = () => ({ outcome: "revise-and-resubmit", conditions: "", statem
 
 export const TABLE: Row[] = [
   // ---- route handlers ----
-  r("api/commissions", "GET", "none", SIGNED),
+  r("api/commissions", "GET", "none", SIGNED, {
+    inspect: (body, c) => {
+      const ids = (JSON.parse(body) as { commissions: { id: number }[] }).commissions.map((x) => x.id);
+      const onOwn = !["anonymous", "outsider"].includes(c.role);
+      if (ids.includes(c.foreign)) return "lists the other studio's commission";
+      return ids.includes(c.own) === onOwn ? null : `${onOwn ? "leaves out" : "lists"} the demo's commission`;
+    },
+  }),
   r("api/commissions/[commissionId]/record.pdf", "GET", "commission", VIEW),
   r("api/commissions/[commissionId]/record.json", "GET", "commission", VIEW),
-  r("api/commissions/[commissionId]/revisions", "GET", "commission", VIEW),
+  r("api/commissions/[commissionId]/revisions", "GET", "commission", VIEW, {
+    inspect: (body, c) => (["designer", "owner"].includes(c.role) ? null
+      : (JSON.parse(body) as { revisions: { state: string }[] }).revisions.some((x) => x.state === "draft") ? "lists a draft to the committee" : null),
+  }),
   r("api/ballots/[ballotId]/close", "POST", "freshOpenBallot", CHAIR),
   r("api/ballots/[ballotId]/votes", "POST", "openBallot", VOTERS, { body: () => ({ choice: "in-favour" }) }),
   // Auth.js's own endpoints: the session answer is the caller's own (null when signed out) ...
-  r("api/auth/[...nextauth]", "GET", "none", PUBLIC, { url: "/api/auth/session", params: { nextauth: ["session"] } }),
+  r("api/auth/[...nextauth]", "GET", "none", PUBLIC, {
+    url: "/api/auth/session", params: { nextauth: ["session"] },
+    inspect: (body, c) => {
+      const email = (JSON.parse(body) as { user?: { email?: string } } | null)?.user?.email ?? null;
+      return email === c.email ? null : `answers the session of ${email} to ${c.email}`;
+    },
+  }),
   // ... and a sign-in request without Auth.js's CSRF token is turned away with nothing written (no link).
   r("api/auth/[...nextauth]", "POST", "none", REDIRECT, {
     url: "/api/auth/signin/nodemailer", params: { nextauth: ["signin", "nodemailer"] }, unchangedAlways: true,
@@ -104,6 +123,15 @@ export const TABLE: Row[] = [
   r("api/revisions/[revisionId]/decision", "POST", "freshCirculated", CHAIR, { body: decision }),
   r("api/revisions/[revisionId]/decision/sign-in-link", "POST", "current", CHAIR),
   r("api/revisions/[revisionId]/meeting-vote", "POST", "freshCirculated", CHAIR, { body: meetingVote }),
+  // The same revision routes on a draft: the committee cannot see it at all; the studio may read, not decide.
+  r("api/revisions/[revisionId]/ballot", "GET", "draft", DRAFT),
+  r("api/revisions/[revisionId]/ballot", "POST", "draft", DRAFT_CHAIR_ONLY, { body: () => ({ closesAt: inHours(48) }) }),
+  r("api/revisions/[revisionId]/comments", "GET", "draft", DRAFT),
+  r("api/revisions/[revisionId]/comments", "POST", "draft", "401 404 404 404 404 404 409 409", { body: () => ({ body: "A note to ourselves." }) }),
+  r("api/revisions/[revisionId]/decision", "GET", "draft", DRAFT),
+  r("api/revisions/[revisionId]/decision", "POST", "draft", DRAFT_CHAIR_ONLY, { body: decision }),
+  r("api/revisions/[revisionId]/decision/sign-in-link", "POST", "draft", DRAFT_CHAIR_ONLY),
+  r("api/revisions/[revisionId]/meeting-vote", "POST", "draft", DRAFT_CHAIR_ONLY, { body: meetingVote }),
   r("api/attachments/[attachmentId]/file", "GET", "readable", VIEW),
   r("api/attachments/[attachmentId]/file", "GET", "draftAttachment", DRAFT),
   r("api/attachments/[attachmentId]/thumb", "GET", "readable", VIEW),

@@ -99,6 +99,7 @@ describe("the authorization matrix", () => {
     expect(result.unexpectedAllows, "attempts allowed that the table refuses").toEqual([]);
     expect(result.mismatches, "attempts answered otherwise than the table says").toEqual([]);
     expect(result.traces, "refused attempts that changed something").toEqual([]);
+    expect(result.leaks, "allowed answers that show what the caller may not see").toEqual([]);
     expect(result.attempts).toBeGreaterThan(500);
     // The chair's sign-in links did go out, to the chair only (the allowed attempts of those rows).
     expect(mails.length).toBeGreaterThan(0);
