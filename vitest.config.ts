@@ -15,6 +15,8 @@ export default defineConfig({
         resolve: { alias },
         test: {
           name: "integration",
+          // next-auth imports "next/server" without an extension; let vite resolve it (as Next.js does).
+          server: { deps: { inline: ["next-auth"] } },
           include: ["tests/integration/**/*.test.ts"],
           environment: "node",
           // next-auth imports "next/server" without an extension; inlined, Vite resolves it.
