@@ -28,7 +28,7 @@ export const { handlers, auth, signIn, signOut } = NextAuth(() => ({
     verificationTokensTable: verificationTokens,
   }),
   session: { strategy: "database", maxAge: 30 * 24 * 3600 },
-  trustHost: true,
+  trustHost: env.trustProxy || !env.production,
   pages: { signIn: "/sign-in", verifyRequest: "/sign-in/check-inbox", error: "/sign-in" },
   providers: [
     Nodemailer({
