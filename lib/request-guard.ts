@@ -28,8 +28,10 @@ const WHAT: Record<BodyKind, string> = {
   multipart: "a file upload (multipart/form-data)",
 };
 
-function refuse(status: number, code: string, message: string): Response {
-  return Response.json({ error: message, code }, { status, headers: { "cache-control": "no-store" } });
+export const FILE_TOO_LARGE = "The file is over the limit of 25 MB per file. Make it smaller (for a photo, export it at a lower size) and try again.";
+
+function refuse(status: number, code: string, message: string, fields?: Record<string, string>): Response {
+  return Response.json({ error: message, code, ...(fields ? { fields } : {}) }, { status, headers: { "cache-control": "no-store" } });
 }
 
 function mediaType(header: string | null): string | null {
@@ -78,12 +80,15 @@ export async function guardRequest(req: Request, appOrigin: string, kind: BodyKi
   if (bad) return bad;
   const type = mediaType(req.headers.get("content-type"));
   const limit = BODY_LIMITS[kind];
-  const tooLarge = () => refuse(413, "body-too-large", `The request body is over the limit of ${Math.round(limit / 1024)} KB.`);
+  const tooLarge = () =>
+    kind === "multipart"
+      ? refuse(413, "body-too-large", FILE_TOO_LARGE, { file: FILE_TOO_LARGE })
+      : refuse(413, "body-too-large", `The request body is over the limit of ${Math.round(limit / 1024)} KB.`);
   const wrongType = () => refuse(415, "unsupported-media-type", `Send the request body as ${WHAT[kind]}.`);
   if (type !== null && !ACCEPTED[kind](type)) return wrongType();
-  if (kind === "multipart" && type !== null) return req; // the upload reader caps it, naming the file field
   const declared = Number(req.headers.get("content-length") ?? "NaN");
   if (Number.isFinite(declared) && declared > limit) return tooLarge();
+  if (kind === "multipart" && type !== null) return req; // streamed on; the upload reader counts it as it reads
   const bytes = await readCapped(req, limit);
   if (!bytes) return tooLarge();
   if (type === null && bytes.byteLength > 0) return wrongType();

@@ -1,11 +1,9 @@
 import "server-only";
 import { NextResponse } from "next/server";
 import { ValidationError } from "./errors";
-import { MAX_UPLOAD_REQUEST_BYTES, readCapped } from "./request-guard";
+import { FILE_TOO_LARGE as TOO_LARGE, MAX_UPLOAD_REQUEST_BYTES, readCapped } from "./request-guard";
 
 export { MAX_UPLOAD_REQUEST_BYTES, UPLOAD_OVERHEAD_BYTES } from "./request-guard";
-
-const TOO_LARGE = "The file is over the limit of 25 MB per file. Make it smaller (for a photo, export it at a lower size) and try again.";
 
 /** The answer for a request body over the limit: 413, with the message against the file field. */
 export function tooLarge(): Response {

@@ -71,3 +71,12 @@ describe("mutations only from our own pages", () => {
     expect(await (out as Request).json()).toEqual({ choice: "against" });
   });
 });
+
+describe("uploads keep their own limit", () => {
+  it("a declared length over the upload limit is refused before the handler, naming the file field", async () => {
+    const r = new Request(url, { method: "POST", headers: { origin: APP, "content-type": "multipart/form-data; boundary=x", "content-length": String(MAX_UPLOAD_REQUEST_BYTES + 1) }, body: "--x--" });
+    const out = (await guardRequest(r, APP, "multipart")) as Response;
+    expect(out.status).toBe(413);
+    expect((await out.json()).fields.file).toMatch(/over the limit of 25 MB/);
+  });
+});
