@@ -70,7 +70,7 @@ const ATTACK_BODY = JSON.stringify({ choice: "in-favour", body: "Sent from elsew
 
 test("every mutating API route refuses a missing or foreign Origin, a cross-site fetch, a non-JSON body and an oversized body, and nothing changes", async ({ page, browser, baseURL }, info) => {
   test.skip(info.project.name !== "desktop", "one run is enough: the routes are the same on a phone");
-  test.setTimeout(240_000);
+  test.setTimeout(480_000);
   const routes = mutatingRoutes();
   // The route list comes from the files; make sure it found them (a broken scan must not pass quietly).
   expect(routes.length).toBeGreaterThanOrEqual(15);

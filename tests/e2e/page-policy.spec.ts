@@ -29,6 +29,7 @@ async function demoIds() {
 
 test("every page carries a Content-Security-Policy with a nonce of its own, and every script on it bears that nonce", async ({ page }, info) => {
   test.skip(info.project.name !== "desktop", "headers do not depend on the device");
+  test.setTimeout(240_000);
   await signInAs(page, await makePerson("owner"));
   const urls = pageUrls(await demoIds());
   expect(urls.length).toBeGreaterThanOrEqual(15);
@@ -78,7 +79,7 @@ async function watchViolations(page: Page): Promise<() => Promise<string[]>> {
 }
 
 test("the revision page with its 3D model, comments and ballot, and the verifier, run under the policy with no violation", async ({ page }) => {
-  test.setTimeout(120_000);
+  test.setTimeout(180_000);
   const violations = await watchViolations(page);
   const [rev] = await sql<{ commission_id: number; number: number }[]>(
     "SELECT r.commission_id, r.number FROM revisions r JOIN commissions c ON c.id = r.commission_id WHERE c.title = ? AND r.state = 'circulated' ORDER BY r.number DESC LIMIT 1", [DEMO_TITLE]);
@@ -86,7 +87,7 @@ test("the revision page with its 3D model, comments and ballot, and the verifier
   await page.goto(`/commissions/${rev.commission_id}/revisions/${rev.number}`);
   // The WebGL viewer (three.js through react-three-fiber) draws.
   const canvas = page.getByTestId("font-canvas");
-  await expect(canvas).toBeVisible({ timeout: 20_000 });
+  await expect(canvas).toBeVisible({ timeout: 45_000 });
   await expect(canvas.locator("canvas")).toHaveCount(1);
   // The ballot panel and the comments load through React Query.
   await expect(page.getByTestId("ballot-panel")).toBeVisible();
