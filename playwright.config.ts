@@ -16,7 +16,9 @@ export default defineConfig({
   workers: 2,
   retries: 0,
   reporter: [["list"], ["json", { outputFile: ".data/reports/playwright.json" }]],
-  use: { baseURL, trace: "retain-on-failure", screenshot: "only-on-failure" },
+  // The app takes changes only from its own pages; API calls made from a test stand in for those pages and
+  // so name the app's origin, as the browser does for the pages' own fetches. Tests of refusals override it.
+  use: { baseURL, extraHTTPHeaders: { origin: new URL(baseURL).origin }, trace: "retain-on-failure", screenshot: "only-on-failure" },
   outputDir: ".data/test-results",
   projects: [
     { name: "desktop", use: { ...devices["Desktop Chrome"], launchOptions } },

@@ -9,7 +9,7 @@ export default defineConfig({
     projects: [
       {
         resolve: { alias },
-        test: { name: "unit", include: ["tests/unit/**/*.test.ts"], environment: "node" },
+        test: { name: "unit", include: ["tests/unit/**/*.test.ts"], environment: "node", testTimeout: 20_000 },
       },
       {
         resolve: { alias },
@@ -19,8 +19,6 @@ export default defineConfig({
           server: { deps: { inline: ["next-auth"] } },
           include: ["tests/integration/**/*.test.ts"],
           environment: "node",
-          // next-auth imports "next/server" without an extension; inlined, Vite resolves it.
-          server: { deps: { inline: ["next-auth"] } },
           fileParallelism: false,
           testTimeout: 60_000,
           hookTimeout: 60_000,

@@ -1,5 +1,6 @@
 import type { Metadata, Viewport } from "next";
 import type { ReactNode } from "react";
+import { headers } from "next/headers";
 import "./globals.css";
 import { body, heading } from "./fonts";
 import { Providers } from "./providers";
@@ -12,7 +13,12 @@ export const metadata: Metadata = {
 
 export const viewport: Viewport = { width: "device-width", initialScale: 1, themeColor: "#f6f1e7" };
 
-export default function RootLayout({ children }: { children: ReactNode }) {
+/**
+ * Every page renders per request: its scripts carry the nonce proxy.ts put in this response's
+ * Content-Security-Policy (Next.js reads it from the request), so no page is served with a stale one.
+ */
+export default async function RootLayout({ children }: { children: ReactNode }) {
+  await headers();
   return (
     <html lang="en-GB" className={`${heading.variable} ${body.variable}`}>
       <body className="min-h-screen bg-paper text-ink antialiased">

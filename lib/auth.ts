@@ -54,8 +54,8 @@ function config(): NextAuthConfig {
     adapter: placetAdapter(),
     secret: serverSecret(),
     basePath: "/api/auth",
-    // Every URL Auth.js builds comes from the validated app URL (AUTH_URL), never from a Host header.
-    trustHost: true,
+    // Forwarded host headers are trusted only behind a declared proxy (production requires one).
+    trustHost: env.trustProxy || !env.production,
     session: {
       strategy: "database",
       maxAge: env.sessionIdleSeconds,

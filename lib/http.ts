@@ -1,11 +1,30 @@
 import "server-only";
 import { NextResponse } from "next/server";
 import { isKnownError, ValidationError } from "./errors";
+import { env } from "./env";
+import { guardRequest, type BodyKind } from "./request-guard";
 
-/** Wraps a route handler: known errors become their status with a plain message; others a logged 500. */
-export function handle<A extends unknown[]>(fn: (...args: A) => Promise<Response>) {
+export interface HandleOptions {
+  /** What a mutating request may carry: JSON (the default, up to 64 KB), a form (8 KB) or a file upload. */
+  body?: BodyKind;
+}
+
+const appOrigin = new URL(env.appUrl).origin;
+
+/**
+ * Wraps a route handler. A mutating request (POST, PUT, PATCH, DELETE) must come from our own pages
+ * (Origin, Sec-Fetch-Site) with a body of the route's kind under its size limit, or it is refused before the
+ * handler runs. Known errors become their status with a plain message; others a logged 500.
+ */
+export function handle<A extends unknown[]>(fn: (...args: A) => Promise<Response>, opts: HandleOptions = {}) {
   return async (...args: A): Promise<Response> => {
     try {
+      const req = args[0];
+      if (req instanceof Request) {
+        const checked = await guardRequest(req, appOrigin, opts.body ?? "json");
+        if (checked instanceof Response) return checked;
+        (args as unknown[])[0] = checked;
+      }
       return await fn(...args);
     } catch (err) {
       return errorResponse(err);

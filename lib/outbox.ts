@@ -2,7 +2,7 @@ import "server-only";
 import { and, eq, lte, sql } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import { outbox } from "@/db/schema";
-import { sendMail } from "./mail";
+import { headerText, MAX_SUBJECT_CHARS, sendMail } from "./mail";
 import type { Tx } from "./trail";
 
 export interface OutboxMessage {
@@ -17,7 +17,7 @@ export async function enqueueMail(tx: Tx, messages: OutboxMessage[]): Promise<vo
   if (!messages.length) return;
   await tx
     .insert(outbox)
-    .values(messages.map((m) => ({ dedupeKey: m.dedupeKey.slice(0, 191), toEmail: m.to, subject: m.subject.slice(0, 255), bodyText: m.text })))
+    .values(messages.map((m) => ({ dedupeKey: m.dedupeKey.slice(0, 191), toEmail: m.to, subject: headerText(m.subject, MAX_SUBJECT_CHARS), bodyText: m.text })))
     .onDuplicateKeyUpdate({ set: { dedupeKey: sql`dedupe_key` } });
 }
 

@@ -1,36 +1,13 @@
 import "server-only";
 import { NextResponse } from "next/server";
 import { ValidationError } from "./errors";
-import { MAX_FILE_BYTES } from "./uploads/limits";
+import { FILE_TOO_LARGE as TOO_LARGE, MAX_UPLOAD_REQUEST_BYTES, readCapped } from "./request-guard";
 
-/** Room for the multipart boundaries, part headers and a caption beside one file of the largest size. */
-export const UPLOAD_OVERHEAD_BYTES = 256 * 1024;
-export const MAX_UPLOAD_REQUEST_BYTES = MAX_FILE_BYTES + UPLOAD_OVERHEAD_BYTES;
-
-const TOO_LARGE = "The file is over the limit of 25 MB per file. Make it smaller (for a photo, export it at a lower size) and try again.";
+export { MAX_UPLOAD_REQUEST_BYTES, UPLOAD_OVERHEAD_BYTES } from "./request-guard";
 
 /** The answer for a request body over the limit: 413, with the message against the file field. */
 export function tooLarge(): Response {
   return NextResponse.json({ error: TOO_LARGE, fields: { file: TOO_LARGE } }, { status: 413 });
-}
-
-/** Reads the body, stopping as soon as it passes `limit` bytes (a missing or false Content-Length included). */
-async function readCapped(req: Request, limit: number): Promise<Uint8Array<ArrayBuffer> | null> {
-  if (!req.body) return new Uint8Array(0);
-  const reader = req.body.getReader();
-  const parts: Uint8Array[] = [];
-  let total = 0;
-  for (;;) {
-    const { done, value } = await reader.read();
-    if (done) break;
-    total += value.byteLength;
-    if (total > limit) {
-      await reader.cancel().catch(() => undefined);
-      return null;
-    }
-    parts.push(value);
-  }
-  return new Uint8Array(Buffer.concat(parts));
 }
 
 export interface UploadForm {

@@ -21,11 +21,12 @@ export SMTP_PORT="${SMTP_PORT:-1025}"
 export MAIL_WEB_PORT="${MAIL_WEB_PORT:-1080}"
 export MAIL_FROM="${MAIL_FROM:-Placet <noreply@placet.localhost>}"
 export AUTH_URL="${AUTH_URL:-http://localhost:${PORT:-3000}}"
-export AUTH_TRUST_HOST=true
 export STORAGE_DIR="${STORAGE_DIR:-$DATA_DIR/files}"
 if [ -z "${AUTH_SECRET:-}" ]; then
   mkdir -p "$DATA_DIR"
-  [ -f "$DATA_DIR/auth-secret" ] || head -c 32 /dev/urandom | base64 > "$DATA_DIR/auth-secret"
+  # The secret is readable by its owner only (mode 600), also when an older checkout wrote it wider.
+  [ -f "$DATA_DIR/auth-secret" ] || (umask 077 && head -c 32 /dev/urandom | base64 > "$DATA_DIR/auth-secret")
+  chmod 600 "$DATA_DIR/auth-secret"
   AUTH_SECRET="$(cat "$DATA_DIR/auth-secret")"
   export AUTH_SECRET
 fi

@@ -33,7 +33,7 @@ if [ "${PLACET_SKIP_BUILD:-0}" != 1 ] || [ ! -f .next/BUILD_ID ]; then
   npx next build >"$DATA_DIR/build.log" 2>&1 || { tail -40 "$DATA_DIR/build.log"; exit 1; }
 fi
 
-setsid npx next start -H 127.0.0.1 -p "$PORT" &
+PLACET_DEMO=1 setsid npx next start -H 127.0.0.1 -p "$PORT" &
 pids+=($!)
 node scripts/wait-for.mjs 60 "http://127.0.0.1:$PORT/api/health" || exit 1
 

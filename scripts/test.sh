@@ -52,11 +52,11 @@ e2e_rc=1
 if [ "$build_rc" = 0 ]; then
   export DATABASE_URL="$BASE/${DB_NAME}_test_e2e" MIGRATOR_URL="$MBASE/${DB_NAME}_test_e2e" SMTP_PORT="$E2E_SMTP" MAIL_WEB_PORT="$E2E_WEB" AUTH_URL="http://localhost:$E2E_PORT"
   npx tsx --conditions=react-server scripts/seed.ts && bash scripts/mail.sh
-  setsid npx next start -H 127.0.0.1 -p "$E2E_PORT" >"$DATA_DIR/e2e-server.log" 2>&1 &
+  PLACET_DEMO=1 setsid npx next start -H 127.0.0.1 -p "$E2E_PORT" >"$DATA_DIR/e2e-server.log" 2>&1 &
   server_pid=$!
   # A second app node on the same database, to show the app keeps no state of its own.
   E2E_PORT_B=$((E2E_PORT + 1))
-  setsid npx next start -H 127.0.0.1 -p "$E2E_PORT_B" >"$DATA_DIR/e2e-server-b.log" 2>&1 &
+  PLACET_DEMO=1 setsid npx next start -H 127.0.0.1 -p "$E2E_PORT_B" >"$DATA_DIR/e2e-server-b.log" 2>&1 &
   server_b_pid=$!
   node scripts/wait-for.mjs 90 "http://127.0.0.1:$E2E_PORT/api/health" "http://127.0.0.1:$E2E_PORT_B/api/health" || tail -20 "$DATA_DIR/e2e-server.log"
   log "end-to-end tests (Playwright, chromium, desktop and phone)"

@@ -24,4 +24,4 @@ export const POST = handle(async (req: Request, ctx: Ctx) => {
   if (form instanceof Response) return form;
   const attachment = await addAttachment(viewer, revisionId, form);
   return Response.json(attachment, { status: 201 });
-});
+}, { body: "multipart" });
