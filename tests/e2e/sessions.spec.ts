@@ -1,6 +1,9 @@
 import { expect, test } from "@playwright/test";
 import { DEMO_TITLE, makePerson, signInAs, sql } from "./helpers";
 
+// Several sign-ins and mail round trips per test, on a shared machine: a longer allowance.
+test.describe.configure({ timeout: 180_000 });
+
 test("the session cookie is HttpOnly and SameSite=Lax, and no page or JSON carries it (OWASP ASVS 4.0.3 V3.1.1, V3.4.2, V3.4.3)", async ({ page, context, baseURL }) => {
   await signInAs(page, await makePerson("member"));
   const cookies = await context.cookies();

@@ -28,6 +28,9 @@ async function useLink(request: APIRequestContext, baseURL: string | undefined, 
   });
 }
 
+// Several sign-ins and mail round trips per test, on a shared machine: a longer allowance.
+test.describe.configure({ timeout: 180_000 });
+
 test("Auth.js's own sign-in endpoints are not served (OWASP ASVS 4.0.3 V1.2.4: one way in)", async ({ request }) => {
   expect((await request.get("/api/auth/csrf")).status()).toBe(404);
   expect((await request.post("/api/auth/signin/nodemailer", { form: { email: CHAIR, csrfToken: "x" } })).status()).toBe(404);

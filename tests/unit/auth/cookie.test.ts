@@ -8,7 +8,7 @@ async function cookieModule(appUrl: string) {
 
 afterEach(() => { vi.unstubAllEnvs(); });
 
-describe("session cookie flags", () => {
+describe("session cookie flags", { timeout: 30_000 }, () => {
   it("under https: __Host- prefix, Secure, HttpOnly, SameSite=Lax, Path=/ (OWASP ASVS 4.0.3 V3.4.1–V3.4.5; RFC 6265bis §4.1.3.2)", async () => {
     const m = await cookieModule("https://placet.example");
     const header = m.setCookieHeader("v", 43200);
