@@ -51,7 +51,7 @@ const chair: Rule = (a) => a.committeeRole === "chair";
 const committee: Rule = (a) => a.committeeRole !== null;
 const anyone: Rule = (a) => studio(a) || committee(a);
 
-/** The table of DESIGN §2, one line an action. Ballot.vote is further narrowed by the rules (chair votes?). */
+/** Who may do what, one line an action. Ballot.vote is further narrowed by the rules (chair votes?). */
 const RULES: Record<Action, Rule> = {
   "commission.view": anyone,
   "commission.create": studio,
@@ -59,7 +59,7 @@ const RULES: Record<Action, Rule> = {
   "people.view": anyone,
   "people.inviteCommittee": studio,
   "people.inviteAdviser": (a) => studio(a) || chair(a),
-  "rules.edit": (a) => studio(a) || chair(a),
+  "rules.edit": chair,
   "revision.viewDraft": studio,
   "revision.viewCirculated": anyone,
   "revision.draft": studio,

@@ -2,7 +2,7 @@
 import { revalidatePath } from "next/cache";
 import { redirect } from "next/navigation";
 import { requireViewer } from "@/lib/session";
-import { updateRules } from "@/lib/dal/commissions";
+import { confirmRules, updateRules } from "@/lib/dal/rules";
 import { formErrors } from "@/lib/action-errors";
 
 export interface RulesState { errors?: Record<string, string> }
