@@ -1,6 +1,6 @@
 import "server-only";
 import { and, eq } from "drizzle-orm";
-import { commissions, studioMembers } from "@/db/schema";
+import { commissions, sessions, studioMembers } from "@/db/schema";
 import { can, type Action } from "@/models/permissions/policy";
 import { env } from "../env";
 import { ForbiddenError, FreshSignInRequired, NotFoundError } from "../errors";
@@ -31,13 +31,27 @@ export async function lockedFor(tx: Tx, viewer: Viewer, commissionId: number, op
     .where(and(eq(studioMembers.studioId, c.studioId), eq(studioMembers.userId, viewer.id))).limit(1);
   const access = accessFrom(c, staff?.role ?? null, await committeeStanding(tx, viewer.id, commissionId));
   if (opts.action && !can(access.actor, opts.action)) throw new ForbiddenError(opts.refusal ?? refusal(opts.action));
-  if (opts.fresh && (await freshness(viewer)).needed) throw new FreshSignInRequired(opts.fresh.message);
+  if (opts.fresh && (await freshness(viewer, tx)).needed) throw new FreshSignInRequired(opts.fresh.message);
   return access;
 }
 
-/** How long ago the viewer signed in, against the window for signing a decision. */
-export async function freshness(viewer: Viewer): Promise<{ needed: boolean; signedInAt: string | null }> {
-  const started = await sessionStartedAt(viewer);
+/**
+ * How long ago the viewer signed in, against the window for signing a decision. Outside a transaction
+ * this asks the viewer API; under the lock it reads the same rows through the transaction's own
+ * connection (a second connection from the pool could be the one the waiting writers hold).
+ */
+export async function freshness(viewer: Viewer, tx?: Tx): Promise<{ needed: boolean; signedInAt: string | null }> {
+  const started = tx ? await sessionStartedIn(tx, viewer) : await sessionStartedAt(viewer);
   const needed = !started || Date.now() - started.getTime() > env.freshSignInSeconds * 1000;
   return { needed, signedInAt: started?.toISOString() ?? null };
+}
+
+/** sessionStartedAt (lib/dal/viewer.ts), read in the caller's transaction: this request's session if known. */
+async function sessionStartedIn(tx: Tx, viewer: Viewer): Promise<Date | null> {
+  const where = viewer.sessionToken
+    ? and(eq(sessions.userId, viewer.id), eq(sessions.sessionToken, viewer.sessionToken))
+    : eq(sessions.userId, viewer.id);
+  const rows = await tx.select({ createdAt: sessions.createdAt }).from(sessions).where(where);
+  if (!rows.length) return null;
+  return rows.reduce((a, b) => (a.createdAt > b.createdAt ? a : b)).createdAt;
 }
