@@ -24,3 +24,14 @@ export async function rulesAction(commissionId: number, _prev: RulesState, form:
   revalidatePath(`/commissions/${commissionId}`, "layout");
   redirect(`/commissions/${commissionId}`);
 }
+
+/** The chair confirms the rules the studio proposed, as they stand. */
+export async function confirmRulesAction(commissionId: number, _prev: RulesState, _form: FormData): Promise<RulesState> {
+  try {
+    await confirmRules(await requireViewer(), commissionId);
+  } catch (err) {
+    return { errors: formErrors(err, "The rules could not be confirmed. Nothing was changed.") };
+  }
+  revalidatePath(`/commissions/${commissionId}`, "layout");
+  redirect(`/commissions/${commissionId}`);
+}
