@@ -71,6 +71,9 @@ describe("the decision record", () => {
     expect(all).toContain("theta = 120°");
     expect(all).toContain("Created the commission");
     expect(all).toContain("Margaret Ellery (chair)");
+    // The vote behind the decision: marked as taken from a meeting, with its minutes and its roll.
+    expect(all).toContain("recorded by the chair from a meeting; minutes: Minute book 3, page 41");
+    expect(all).toMatch(/Roll\s+David Osei, Ruth Penhallow, Colin Marsh \(3 voting members/);
   });
 
   it("leaves the studio's drafts out", async () => {
