@@ -16,6 +16,7 @@ export function NextSteps({ commission: c, current = null, ballot = null }: Prop
   const closed = ballot?.ballot?.status === "closed" ? ballot : null;
   const link = current ? `/commissions/${c.id}/revisions/${current.number}` : `/commissions/${c.id}/revisions`;
   const steps: React.ReactNode[] = [];
+  if (chair && !c.rulesConfirmed) steps.push(<>The studio proposed the committee&apos;s rules: <Link href={`/commissions/${c.id}/rules`}>confirm or change them</Link> before the first vote.</>);
   switch (c.stage) {
     case "brief":
     case "concept":

@@ -102,6 +102,9 @@ export const commissions = mysqlTable("commissions", {
   /** The trail's head: the last appended event's seq and hash, moved in the same transaction as each append. */
   trailHeadSeq: int("trail_head_seq", { unsigned: true }).notNull().default(0),
   trailHeadHash: varchar("trail_head_hash", { length: 64 }).notNull().default("0".repeat(64)),
+  /** When the chair confirmed the rules (the studio only proposes them); no ballot before this. */
+  rulesConfirmedAt: utc("rules_confirmed_at"),
+  rulesConfirmedBy: varchar("rules_confirmed_by", { length: 255 }).references(() => users.id),
   createdAt: now(),
   updatedAt: utc("updated_at").notNull().default(sql`CURRENT_TIMESTAMP(3)`),
 }, (t) => [index("commissions_studio").on(t.studioId)]);
@@ -248,9 +251,22 @@ export const ballots = mysqlTable("ballots", {
   closesAt: utc("closes_at"),
   closedAt: utc("closed_at"),
   meetingDate: varchar("meeting_date", { length: 10 }),
+  /** For a meeting vote: where the minutes are (a reference: minute book page, file name, link). */
+  minutesRef: varchar("minutes_ref", { length: 500 }),
   /** Frozen when closed: rules, voting members, counts and decideBallot's result. */
   result: json<FrozenResult | null>("result"),
 }, (t) => [index("ballots_revision").on(t.revisionId)]);
+
+/** The roll: who may vote on a ballot, fixed when it opens (or, for a meeting vote, when it is recorded). */
+export const ballotRoll = mysqlTable("ballot_roll", {
+  id: id(),
+  ballotId: ref("ballot_id").notNull().references(() => ballots.id),
+  userId: varchar("user_id", { length: 255 }).notNull().references(() => users.id),
+  /** The name as it stood when the roll was fixed. */
+  name: varchar("name", { length: 255 }).notNull(),
+  role: mysqlEnum("role", ["chair", "member"]).notNull(),
+  position: int("position", { unsigned: true }).notNull(),
+}, (t) => [uniqueIndex("ballot_roll_ballot_user").on(t.ballotId, t.userId)]);
 
 export const votes = mysqlTable("votes", {
   id: id(),

@@ -4,7 +4,8 @@ import { outbox, studioMembers, studios, users } from "./schema";
 import { DEMO_COMMISSION, DEMO_COMMITTEE, DEMO_RULES, DEMO_STAFF, DEMO_STUDIO, OTHER_COMMISSION, OTHER_COMMITTEE } from "./demo";
 import { demoStudioSettings } from "@/models/font";
 import { loadViewer } from "@/lib/dal/viewer";
-import { createCommission, updateRules } from "@/lib/dal/commissions";
+import { createCommission } from "@/lib/dal/commissions";
+import { confirmRules } from "@/lib/dal/rules";
 import { invitePerson } from "@/lib/dal/people";
 import { changeStage } from "@/lib/dal/stage";
 import { circulate, createDraft, updateDraft } from "@/lib/dal/revisions-write";
@@ -28,9 +29,10 @@ export async function seedDemo(opts: { revisions?: boolean } = {}) {
   }
   const designer = (await viewerByEmail(DEMO_STAFF[1].email))!;
 
-  const main = await createCommission(designer, DEMO_COMMISSION);
+  // The studio proposes the committee's rules with the commission; each chair confirms them.
+  const main = await createCommission(designer, DEMO_COMMISSION, DEMO_RULES);
   for (const p of DEMO_COMMITTEE) await invitePerson(designer, main.id, p);
-  await updateRules(designer, main.id, DEMO_RULES);
+  await confirmRules((await viewerByEmail(DEMO_COMMITTEE[0].email))!, main.id);
   await changeStage(designer, main.id, "concept", "Brief agreed at the committee's meeting");
   await changeStage(designer, main.id, "design-development", "Concept sketches accepted");
 
@@ -38,6 +40,7 @@ export async function seedDemo(opts: { revisions?: boolean } = {}) {
 
   const other = await createCommission(designer, OTHER_COMMISSION);
   for (const p of OTHER_COMMITTEE) await invitePerson(designer, other.id, p);
+  await confirmRules((await viewerByEmail(OTHER_COMMITTEE[0].email))!, other.id);
 
   // The demo's invitation mails are history, not news: mark them sent so the inbox starts empty.
   await db.update(outbox).set({ status: "sent", sentAt: new Date() });

@@ -1,6 +1,7 @@
 import "server-only";
 import { PDFDocument, StandardFonts } from "pdf-lib";
 import type { DecisionDto } from "@/models/decision";
+import { howVoted, rollWords } from "@/models/decision/tally-words";
 import { ROLE_LABELS } from "@/models/permissions/policy";
 import { formatHead } from "@/models/trail/head";
 import type { DecisionRecordDto } from "./dal/record";
@@ -19,8 +20,8 @@ const roleWords = (role: string) =>
 function tallyWords(d: DecisionDto): string {
   const t = d.tally;
   if (!t) return "No ballot was held on this revision.";
-  const how = t.kind === "meeting" ? `Vote taken at the meeting of ${t.meetingDate ?? "a date not recorded"}` : "Electronic ballot";
-  return `${how}: ${t.outcomeLabel.toLowerCase()}, with ${t.inFavour} in favour, ${t.against} against and ${t.abstain} abstaining, of ${t.votingMembers} voting member${t.votingMembers === 1 ? "" : "s"}.`;
+  const how = howVoted(t);
+  return `${how.charAt(0).toUpperCase()}${how.slice(1)}: ${t.outcomeLabel.toLowerCase()}, with ${t.inFavour} in favour, ${t.against} against and ${t.abstain} abstaining, of ${t.votingMembers} voting member${t.votingMembers === 1 ? "" : "s"}.`;
 }
 
 export interface RecordPdfOptions {
@@ -119,6 +120,7 @@ export async function renderDecisionRecordPdf(input: DecisionRecordDto, opts: Re
       w.gap(4);
     }
     field("Vote", tallyWords(d), S.meta, 96);
+    if (d.tally) field("Roll", rollWords(d.tally), S.meta, 96);
     field("Recorded", `by ${d.recordedByName} on ${utc(d.recordedAt)}`, S.meta, 96);
     field("Revision hash", d.contentHash, S.hash, 96);
     w.gap(10);

@@ -1,6 +1,6 @@
 "use client";
 import { Badge, Card } from "@/components/ui/card";
-import type { BallotStateDto } from "@/models/ballot/state";
+import { FROM_MEETING, type BallotStateDto } from "@/models/ballot/state";
 import { showDate, showTime, useBallotState } from "./api";
 import { CloseBallotButton } from "./CloseBallotButton";
 import { MeetingVoteForm } from "./MeetingVoteForm";
@@ -10,10 +10,32 @@ import { VoteButtons } from "./VoteButtons";
 
 function Status({ s }: { s: BallotStateDto }) {
   const b = s.ballot!;
-  if (b.kind === "meeting") return <p><Badge>Meeting vote</Badge> Taken at the meeting of {showDate(b.meetingDate!)}, recorded by {b.openedByName}.</p>;
+  if (b.kind === "meeting") {
+    return (
+      <p data-testid="from-meeting"><Badge>Meeting vote</Badge> Taken at the meeting of {showDate(b.meetingDate!)}; {FROM_MEETING} ({b.openedByName}).
+        {b.minutesRef ? <> Minutes: {b.minutesRef}.</> : null}</p>
+    );
+  }
   if (b.status === "open") return <p><Badge tone="action">Open</Badge> Opened by {b.openedByName}; voting closes {showTime(b.closesAt!)}.</p>;
   if (b.status === "withdrawn") return <p><Badge>Withdrawn</Badge> This ballot was withdrawn when a newer revision was circulated.</p>;
   return <p><Badge>Closed</Badge> Closed {showTime(b.closedAt!)}.</p>;
+}
+
+/** Who may vote on the ballot shown: fixed when it opened. */
+function RollView({ s }: { s: BallotStateDto }) {
+  if (!s.roll?.length) return null;
+  return (
+    <p className="text-sm text-ink-soft" data-testid="ballot-roll">
+      The roll ({s.roll.length}), fixed when {s.ballot?.kind === "meeting" ? "the vote was recorded" : "the ballot opened"}: {s.roll.map((r) => `${r.name}${r.role === "chair" ? " (chair)" : ""}`).join(", ")}.
+    </p>
+  );
+}
+
+/** Why the chair cannot open a ballot or record a meeting's vote here, and what to do instead. */
+function RouteNotes({ s }: { s: BallotStateDto }) {
+  if (s.revisionState !== "circulated" || s.ballot?.status === "open") return null;
+  const notes = [...new Set([s.openRefusal, s.meetingRefusal].filter((n): n is string => Boolean(n)))];
+  return notes.map((n) => <p key={n} className="text-sm text-ink-soft" data-testid="route-note">{n}</p>);
 }
 
 function ChairTools({ s }: { s: BallotStateDto }) {
@@ -21,6 +43,7 @@ function ChairTools({ s }: { s: BallotStateDto }) {
   const b = s.ballot;
   return (
     <div className="grid gap-4 border-t border-line pt-4" data-testid="chair-ballot-tools">
+      <RouteNotes s={s} />
       {s.you.canClose && b && <CloseBallotButton revisionId={s.revisionId} ballotId={b.id} />}
       {s.you.canOpen && <OpenBallotForm revisionId={s.revisionId} number={s.revisionNumber} />}
       {s.you.canRecordMeeting && (s.electronicAllowed ? (
@@ -55,9 +78,10 @@ export function BallotPanel({ revisionId, commissionId }: { revisionId: number; 
               <Status s={s} />
               <p className="font-serif text-lg">“{b.motion}”</p>
               {s.youMayVote && <VoteButtons revisionId={revisionId} ballotId={b.id} yourVote={s.yourVote} closesAt={b.closesAt} />}
-              {live && !s.youMayVote && <p className="text-sm text-ink-soft">{s.you.isChair ? "Under the rules the chair does not vote." : "Only the committee's voting members vote; you can follow the tally here."}</p>}
+              {live && !s.youMayVote && <p className="text-sm text-ink-soft">{s.you.isChair ? "Under the rules the chair does not vote." : "Only the people on this ballot's roll vote; you can follow the tally here."}</p>}
               {s.result && <ResultView result={s.result} />}
               {s.tally && <TallyView tally={s.tally} live={live} />}
+              <RollView s={s} />
               {b.kind === "meeting" && !s.whoVotedHow.length ? <p className="text-sm text-ink-soft">The minutes record the counts only.</p> : <WhoVotedHow voters={s.whoVotedHow} />}
             </div>
           )}

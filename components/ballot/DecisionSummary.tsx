@@ -1,12 +1,14 @@
 "use client";
 import { Badge, Card, HashText } from "@/components/ui/card";
+import { FROM_MEETING } from "@/models/ballot/state";
 import type { DecisionTallyDto } from "@/models/decision";
 import { showDate, showTime, useDecisionState } from "./api";
 
 export function tallyLine(t: DecisionTallyDto | null): string {
   if (!t) return "No ballot was held on this revision.";
-  const where = t.kind === "meeting" ? `at the meeting of ${showDate(t.meetingDate!)}` : "by electronic ballot";
-  return `${t.outcomeLabel} ${where}: ${t.inFavour} in favour, ${t.against} against, ${t.abstain} abstaining, of ${t.votingMembers} voting members.`;
+  const where = t.kind === "meeting" ? `at the meeting of ${showDate(t.meetingDate!)} (${FROM_MEETING})` : "by electronic ballot";
+  const roll = t.roll.length ? ` The roll: ${t.roll.map((p) => `${p.name}${p.role === "chair" ? " (chair)" : ""}`).join(", ")}.` : "";
+  return `${t.outcomeLabel} ${where}: ${t.inFavour} in favour, ${t.against} against, ${t.abstain} abstaining, of ${t.votingMembers} voting members.${roll}`;
 }
 
 /** The committee's decision on a revision, read-only, for everyone once it is recorded. */

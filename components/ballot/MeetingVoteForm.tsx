@@ -17,9 +17,10 @@ export function MeetingVoteForm({ state }: { state: BallotStateDto }) {
   const [counts, setCounts] = useState({ inFavour: "", against: "", abstain: "" });
   const [each, setEach] = useState<Record<string, VoteChoice | "">>({});
   const [motion, setMotion] = useState("");
+  const [minutesRef, setMinutes] = useState("");
   const save = useMutation({
     mutationFn: () => api(`/api/revisions/${state.revisionId}/meeting-vote`, {
-      meetingDate, motion: motion.trim() || undefined,
+      meetingDate, minutesRef, motion: motion.trim() || undefined,
       ...(mode === "counts"
         ? { counts: { inFavour: whole(counts.inFavour), against: whole(counts.against), abstain: whole(counts.abstain) } }
         : { perMember: Object.entries(each).filter(([, c]) => c).map(([userId, choice]) => ({ userId, choice })) }),
@@ -27,7 +28,7 @@ export function MeetingVoteForm({ state }: { state: BallotStateDto }) {
     onSuccess: (s) => qc.setQueryData(ballotKey(state.revisionId), s),
   });
   const f = save.error instanceof ApiError ? save.error.fields : {};
-  const shownElsewhere = ["meetingDate", "inFavour", "against", "abstain", "perMember", "motion"].some((k) => f[k]);
+  const shownElsewhere = ["meetingDate", "minutesRef", "inFavour", "against", "abstain", "perMember", "motion"].some((k) => f[k]);
   const submit = (e: FormEvent) => { e.preventDefault(); save.mutate(); };
   const count = (k: keyof typeof counts, label: string) => (
     <TextField label={label} name={`meeting-${k}`} type="number" inputMode="numeric" min={0} max={state.votingMembers.length}
@@ -38,6 +39,8 @@ export function MeetingVoteForm({ state }: { state: BallotStateDto }) {
       <h4 className="font-serif text-lg font-semibold">Record the vote taken at a meeting</h4>
       <FormError message={save.isError && !shownElsewhere ? save.error.message : undefined} />
       <TextField label="Date of the meeting" name="meetingDate" type="date" max={today()} value={meetingDate} onChange={(e) => setDate(e.target.value)} error={f.meetingDate} />
+      <TextField label="Where the minutes are" name="minutesRef" value={minutesRef} onChange={(e) => setMinutes(e.target.value)} maxLength={500}
+        hint="The minute book and page, or the file or link where the signed minutes are kept." error={f.minutesRef} />
       <TextField label="Motion (optional)" name="meeting-motion" value={motion} onChange={(e) => setMotion(e.target.value)} maxLength={500}
         placeholder={`That Revision ${state.revisionNumber} be approved.`} error={f.motion} />
       <fieldset className="mb-4">
@@ -64,7 +67,7 @@ export function MeetingVoteForm({ state }: { state: BallotStateDto }) {
           {f.perMember && <p role="alert" className="mb-3 text-sm font-medium text-danger">{f.perMember}</p>}
         </div>
       )}
-      <p className="mb-2 text-sm text-ink-soft">The committee has {state.votingMembers.length} voting members. The result follows from the rules above.</p>
+      <p className="mb-2 text-sm text-ink-soft">The committee has {state.votingMembers.length} voting members. The result follows from the rules above, and every view marks it as recorded by the chair from a meeting.</p>
       <Button type="submit" disabled={save.isPending}>{save.isPending ? "Recording…" : "Record the meeting's vote"}</Button>
     </form>
   );

@@ -2,7 +2,8 @@ import "server-only";
 import { and, eq } from "drizzle-orm";
 import type { Db } from "@/db/client";
 import { commissionMembers, commissions } from "@/db/schema";
-import { can, type Action, type Actor } from "@/models/permissions/policy";
+import { can, type Action, type Actor, type CommitteeRole, type StudioRole } from "@/models/permissions/policy";
+import type { Tx } from "../trail";
 import { ForbiddenError, NotFoundError } from "../errors";
 import type { Viewer } from "./viewer";
 
@@ -24,12 +25,22 @@ export async function loadAccess(db: Db, viewer: Viewer, commissionId: number): 
   const [c] = await db.select().from(commissions).where(eq(commissions.id, commissionId)).limit(1);
   if (!c) throw new NotFoundError();
   const studioRole = viewer.studios.find((s) => s.studioId === c.studioId)?.role ?? null;
+  return accessFrom(c, studioRole, await committeeStanding(db, viewer.id, commissionId));
+}
+
+/** The viewer's seat on the commission's committee, if any. */
+export async function committeeStanding(db: Db | Tx, userId: string, commissionId: number) {
   const [m] = await db
     .select({ role: commissionMembers.role, treasurer: commissionMembers.treasurer })
     .from(commissionMembers)
-    .where(and(eq(commissionMembers.commissionId, commissionId), eq(commissionMembers.userId, viewer.id)))
+    .where(and(eq(commissionMembers.commissionId, commissionId), eq(commissionMembers.userId, userId)))
     .limit(1);
-  const actor: Actor = { studioRole, committeeRole: m?.role ?? null, treasurer: m?.treasurer ?? false };
+  return m ?? null;
+}
+
+/** The access a standing gives; no standing at all is "not found". */
+export function accessFrom(c: CommissionRow, studioRole: StudioRole | null, seat: { role: CommitteeRole; treasurer: boolean } | null): Access {
+  const actor: Actor = { studioRole, committeeRole: seat?.role ?? null, treasurer: seat?.treasurer ?? false };
   if (!can(actor, "commission.view")) throw new NotFoundError();
   return { commission: c, actor, actingRole: actor.committeeRole ?? actor.studioRole ?? "none" };
 }
@@ -41,7 +52,7 @@ export async function authorize(db: Db, viewer: Viewer, commissionId: number, ac
   return access;
 }
 
-function refusal(action: Action): string {
+export function refusal(action: Action): string {
   if (action.startsWith("ballot.") || action === "decision.record") return "Only the chair (or voting members, for votes) may do that.";
   if (action === "people.inviteAdviser") return "Only the studio or the chair may invite advisers.";
   if (action === "people.inviteCommittee") return "Only the studio may invite committee members; the chair may invite advisers.";

@@ -8,7 +8,9 @@ import { editRefusal } from "@/models/revision";
 import { countCheck, inspectUpload, safeDisplayName } from "../uploads";
 import { getStorage } from "../storage";
 import { ConflictError, ForbiddenError, NotFoundError, ValidationError } from "../errors";
-import { appendTrail, lockCommission, type Tx } from "../trail";
+import type { Tx } from "../trail";
+import { draftChanged } from "./draft-trail";
+import { lockedFor } from "./locked";
 import { loadRevisionById, type RevisionRow } from "./revision-access";
 import { attachmentDto, type AttachmentDto } from "./revisions-read";
 import type { Access } from "./access";
@@ -31,9 +33,11 @@ function checkCaption(raw: unknown): string {
   return caption;
 }
 
+const STUDIO_FILES = "Only the studio adds, changes or removes a revision's files.";
+
 /** The studio, on a draft: anyone else is refused; a circulated revision is frozen. */
 function requireEditable(access: Access, revision: Pick<RevisionRow, "state" | "number">) {
-  if (!can(access.actor, "attachment.upload")) throw new ForbiddenError("Only the studio adds, changes or removes a revision's files.");
+  if (!can(access.actor, "attachment.upload")) throw new ForbiddenError(STUDIO_FILES);
   const refusal = editRefusal(revision.state, revision.number);
   if (refusal) throw new ConflictError(refusal);
 }
@@ -100,7 +104,7 @@ export async function addAttachment(viewer: Viewer, revisionId: number, input: {
     await storage.put(key, result.normalized, result.mime);
     if (thumbKey && result.thumbnail) await storage.put(thumbKey, result.thumbnail, "image/webp");
     const id = await db.transaction(async (tx) => {
-      await lockCommission(tx, revision.commissionId);
+      const locked = await lockedFor(tx, viewer, revision.commissionId, { action: "attachment.upload", refusal: STUDIO_FILES });
       const fresh = await freshRevision(tx, revision.id);
       const again = countCheck(await fileCount(tx, fresh.id), 1);
       if (!again.ok) throw full(again.message);
@@ -112,11 +116,7 @@ export async function addAttachment(viewer: Viewer, revisionId: number, input: {
         position: last === null || last === undefined ? 0 : Number(last) + 1, uploadedBy: viewer.id,
       }).$returningId();
       await tx.update(revisions).set({ updatedAt: new Date() }).where(eq(revisions.id, fresh.id));
-      await appendTrail(tx, {
-        commissionId: fresh.commissionId, actorId: viewer.id, actorRole: access.actingRole, action: "attachment added",
-        subjectType: "attachment", subjectId: res.id,
-        payload: { number: fresh.number, sha256: result.sha256, kind: result.kind }, // no name: drafts are the studio's alone
-      });
+      await draftChanged(tx, { commissionId: fresh.commissionId, actorId: viewer.id, actorRole: locked.actingRole, revisionId: fresh.id, number: fresh.number });
       return res.id;
     });
     const [row] = await db.select().from(attachments).where(eq(attachments.id, id));
@@ -133,16 +133,13 @@ export async function removeAttachment(viewer: Viewer, attachmentId: number): Pr
   const { access, revision, row } = await loadAttachment(db, viewer, attachmentId);
   requireEditable(access, revision);
   await db.transaction(async (tx) => {
-    await lockCommission(tx, row.commissionId);
+    const locked = await lockedFor(tx, viewer, row.commissionId, { action: "attachment.upload", refusal: STUDIO_FILES });
     const fresh = await freshRevision(tx, revision.id);
     const [still] = await tx.select({ id: attachments.id }).from(attachments).where(eq(attachments.id, row.id));
     if (!still) throw new NotFoundError();
     await tx.delete(attachments).where(and(eq(attachments.id, row.id), eq(attachments.revisionId, fresh.id)));
     await tx.update(revisions).set({ updatedAt: new Date() }).where(eq(revisions.id, fresh.id));
-    await appendTrail(tx, {
-      commissionId: row.commissionId, actorId: viewer.id, actorRole: access.actingRole, action: "attachment removed",
-      subjectType: "attachment", subjectId: row.id, payload: { number: fresh.number, sha256: row.sha256, kind: row.kind },
-    });
+    await draftChanged(tx, { commissionId: row.commissionId, actorId: viewer.id, actorRole: locked.actingRole, revisionId: fresh.id, number: fresh.number });
   });
   await deleteQuietly([row.storageKey, row.thumbKey]);
   return { id: row.id };
@@ -155,18 +152,14 @@ export async function updateCaption(viewer: Viewer, attachmentId: number, rawCap
   requireEditable(access, revision);
   const caption = checkCaption(rawCaption);
   await db.transaction(async (tx) => {
-    await lockCommission(tx, row.commissionId);
+    const locked = await lockedFor(tx, viewer, row.commissionId, { action: "attachment.upload", refusal: STUDIO_FILES });
     const fresh = await freshRevision(tx, revision.id);
     const [current] = await tx.select().from(attachments).where(eq(attachments.id, row.id));
     if (!current) throw new NotFoundError();
     if (current.caption === caption) return;
     await tx.update(attachments).set({ caption }).where(eq(attachments.id, row.id));
     await tx.update(revisions).set({ updatedAt: new Date() }).where(eq(revisions.id, fresh.id));
-    await appendTrail(tx, {
-      commissionId: row.commissionId, actorId: viewer.id, actorRole: access.actingRole, action: "revision updated",
-      subjectType: "revision", subjectId: fresh.id,
-      payload: { number: fresh.number, captionChanged: { attachmentId: row.id } },
-    });
+    await draftChanged(tx, { commissionId: row.commissionId, actorId: viewer.id, actorRole: locked.actingRole, revisionId: fresh.id, number: fresh.number });
   });
   const [updated] = await db.select().from(attachments).where(eq(attachments.id, row.id));
   return attachmentDto(updated);

@@ -2,12 +2,14 @@ import "server-only";
 import { desc, eq, inArray } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import { ballots, users, votes } from "@/db/schema";
-import { allowsElectronicBallot, describeOutcome, describeRules, quorumFor } from "@/models/ballot";
+import { allowsElectronicBallot, describeOutcome, describeRules } from "@/models/ballot";
 import {
   BALLOT_OUTCOME_LABELS, type BallotDto, type BallotResultDto, type BallotStateDto, type FrozenResult, type TallyDto, type VoterDto,
 } from "@/models/ballot/state";
-import { can, mayVote } from "@/models/permissions/policy";
-import { closeDueBallots, countChoices, votingMembersOf, type BallotRow } from "./ballot-core";
+import { electronicBallotRefusal, meetingVoteRefusal } from "@/models/ballot/route";
+import { liveTally, onRoll } from "@/models/ballot/tally";
+import { can } from "@/models/permissions/policy";
+import { ballotsOn, closeDueBallots, currentRoll, loadRoll, UNCONFIRMED_RULES, type BallotRow } from "./ballot-core";
 import { rulesOf } from "./commissions";
 import { loadRevisionById } from "./revision-access";
 import type { Viewer } from "./viewer";
@@ -23,6 +25,7 @@ function ballotDto(b: BallotRow, openedByName: string): BallotDto {
   return {
     id: b.id, kind: b.kind, status: b.status, motion: b.motion, openedAt: b.openedAt.toISOString(), openedByName,
     closesAt: b.closesAt?.toISOString() ?? null, closedAt: b.closedAt?.toISOString() ?? null, meetingDate: b.meetingDate,
+    minutesRef: b.minutesRef,
   };
 }
 
@@ -36,20 +39,26 @@ export async function getBallotState(viewer: Viewer, revisionId: number): Promis
   const { access, revision } = await loadRevisionById(db, viewer, revisionId);
   await closeDueBallots({ revisionId });
   const rules = rulesOf(access.commission);
-  const voters = await votingMembersOf(db, revision.commissionId, rules.chairVotes);
+  const voters = await currentRoll(db, revision.commissionId, rules.chairVotes);
   const all = await db.select().from(ballots).where(eq(ballots.revisionId, revisionId)).orderBy(desc(ballots.id));
   const current = all.find((b) => b.status === "open") ?? all[0] ?? null;
   const isChair = access.actor.committeeRole === "chair";
   const circulated = revision.state === "circulated";
   const anyOpen = current?.status === "open";
   const electronicAllowed = allowsElectronicBallot(rules);
+  const route = await ballotsOn(db, revisionId);
+  const rulesConfirmed = access.commission.rulesConfirmedAt !== null;
+  const meetingRefusal = !rulesConfirmed ? UNCONFIRMED_RULES : meetingVoteRefusal(revision.number, route);
+  const openRefusal = !rulesConfirmed ? UNCONFIRMED_RULES : electronicBallotRefusal(revision.number, route);
 
   let ballot: BallotDto | null = null;
   let tally: TallyDto | null = null;
   let whoVotedHow: VoterDto[] = [];
   let yourVote: BallotStateDto["yourVote"] = null;
   let result: BallotResultDto | null = null;
+  let roll: BallotStateDto["roll"] = null;
   if (current) {
+    roll = await loadRoll(db, current.id);
     const cast = await db.select({ userId: votes.userId, choice: votes.choice, castAt: votes.castAt, name: users.name, email: users.email })
       .from(votes).innerJoin(users, eq(users.id, votes.userId)).where(eq(votes.ballotId, current.id));
     const [opener] = await db.select({ name: users.name, email: users.email }).from(users).where(inArray(users.id, [current.openedBy]));
@@ -60,31 +69,26 @@ export async function getBallotState(viewer: Viewer, revisionId: number): Promis
       result = resultDto(frozen);
       tally = { inFavour: frozen.inFavour, against: frozen.against, abstain: frozen.abstain, ballotsCast: frozen.ballotsCast, votingMembers: frozen.votingMembers, quorumRequired: frozen.quorumRequired };
     } else {
-      const entitled = new Set(voters.map((v) => v.userId));
-      const counts = countChoices(cast.filter((v) => entitled.has(v.userId)).map((v) => v.choice));
-      tally = { ...counts, ballotsCast: counts.inFavour + counts.against + counts.abstain, votingMembers: voters.length, quorumRequired: quorumFor(rules.quorum, voters.length) };
+      tally = liveTally(rules, roll, cast);
     }
     const countsOnly = current.kind === "meeting" && cast.length === 0;
     if (!countsOnly) {
       const byId = new Map(cast.map((v) => [v.userId, v]));
-      whoVotedHow = voters.map((p) => ({ ...p, choice: byId.get(p.userId)?.choice ?? null, at: byId.get(p.userId)?.castAt.toISOString() ?? null }));
-      for (const v of cast) {
-        if (!voters.some((p) => p.userId === v.userId)) whoVotedHow.push({ userId: v.userId, name: v.name ?? v.email, role: "member", choice: v.choice, at: v.castAt.toISOString() });
-      }
+      whoVotedHow = roll.map((p) => ({ ...p, choice: byId.get(p.userId)?.choice ?? null, at: byId.get(p.userId)?.castAt.toISOString() ?? null }));
     }
   }
   const open = current?.status === "open" && current.closesAt !== null && current.closesAt.getTime() > Date.now();
   return {
     revisionId, revisionNumber: revision.number, revisionState: revision.state,
     ballot, tally, whoVotedHow, yourVote,
-    youMayVote: Boolean(open && mayVote(access.actor, rules.chairVotes)),
+    youMayVote: Boolean(open && roll && onRoll(roll, viewer.id)),
     result, rules, rulesText: describeRules(rules, voters.length), electronicAllowed,
-    votingMembers: voters,
+    votingMembers: voters, roll, rulesConfirmed, meetingRefusal, openRefusal,
     you: {
       isChair,
-      canOpen: can(access.actor, "ballot.open") && circulated && !anyOpen && electronicAllowed,
+      canOpen: can(access.actor, "ballot.open") && circulated && !anyOpen && electronicAllowed && !openRefusal,
       canClose: can(access.actor, "ballot.close") && anyOpen,
-      canRecordMeeting: can(access.actor, "ballot.recordMeeting") && circulated && !anyOpen,
+      canRecordMeeting: can(access.actor, "ballot.recordMeeting") && circulated && !anyOpen && !meetingRefusal,
     },
     earlier: all.filter((b) => b !== current).map((b) => ({
       id: b.id, kind: b.kind, status: b.status, closedAt: b.closedAt?.toISOString() ?? null,

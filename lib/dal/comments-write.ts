@@ -7,7 +7,8 @@ import { can } from "@/models/permissions/policy";
 import { commentTextSchema, findMentions, mayEdit, newCommentSchema, readTarget, EDIT_WINDOW_MS, type CommentTarget } from "@/models/comments";
 import { fieldErrors } from "@/models/schemas/people";
 import { ConflictError, ForbiddenError, NotFoundError, ValidationError } from "../errors";
-import { appendTrail, lockCommission, type Tx } from "../trail";
+import { appendTrail, type Tx } from "../trail";
+import { lockedFor } from "./locked";
 import { peopleOnCommission, type CommissionPerson } from "./commission-people";
 import { addReason, sendCommentNotices, type NoticeReason } from "./comment-notices";
 import { loadRevisionById, type RevisionRow } from "./revision-access";
@@ -23,10 +24,13 @@ function parse<S extends z.ZodType>(schema: S, input: unknown): z.output<S> {
   return r.data;
 }
 
+const NO_COMMENTS = "Your role on this commission does not allow comments.";
+const STUDIO_RESOLVES = "Only the studio resolves or reopens comment threads.";
+
 /** The revision, if the viewer may comment on it: anyone on the commission, once it has been circulated. */
 async function commentable(db: Db, viewer: Viewer, revisionId: number) {
   const { access, revision } = await loadRevisionById(db, viewer, revisionId);
-  if (!can(access.actor, "comment.post")) throw new ForbiddenError("Your role on this commission does not allow comments.");
+  if (!can(access.actor, "comment.post")) throw new ForbiddenError(NO_COMMENTS);
   if (revision.state === "draft") throw new ConflictError("Comments open once the revision has been circulated.");
   return { access, revision };
 }
@@ -69,7 +73,7 @@ export async function postComment(viewer: Viewer, revisionId: number, input: unk
   await checkAttachment(db, revision.id, target);
   const commissionId = revision.commissionId;
   return db.transaction(async (tx) => {
-    await lockCommission(tx, commissionId);
+    await lockedFor(tx, viewer, commissionId, { action: "comment.post", refusal: NO_COMMENTS });
     const [res] = await tx.insert(comments).values({ revisionId: revision.id, commissionId, authorId: viewer.id, body, target }).$returningId();
     await appendTrail(tx, {
       commissionId, actorId: viewer.id, actorRole: access.actingRole, action: "comment posted", subjectType: "comment", subjectId: res.id,
@@ -89,7 +93,7 @@ export async function replyToComment(viewer: Viewer, commentId: number, input: u
   const { body } = parse(commentTextSchema, input);
   const threadId = row.parentId ?? row.id;
   return db.transaction(async (tx) => {
-    await lockCommission(tx, revision.commissionId);
+    await lockedFor(tx, viewer, revision.commissionId, { action: "comment.post", refusal: NO_COMMENTS });
     const [root] = await tx.select().from(comments).where(eq(comments.id, threadId));
     if (!root) throw new NotFoundError();
     const [res] = await tx.insert(comments).values({
@@ -113,7 +117,7 @@ export async function editComment(viewer: Viewer, commentId: number, input: unkn
   if (row.authorId !== viewer.id) throw new ForbiddenError("Only the person who wrote a comment can edit it.");
   const { body } = parse(commentTextSchema, input);
   return db.transaction(async (tx) => {
-    await lockCommission(tx, revision.commissionId);
+    await lockedFor(tx, viewer, revision.commissionId);
     const [fresh] = await tx.select().from(comments).where(eq(comments.id, row.id));
     if (!mayEdit(fresh, viewer.id, new Date())) {
       throw new ConflictError(`A comment can be edited for ${EDIT_WINDOW_MS / 60_000} minutes after it is posted; this one can no longer change. Add a reply instead.`);
@@ -134,10 +138,10 @@ export async function editComment(viewer: Viewer, commentId: number, input: unkn
 async function setResolved(viewer: Viewer, commentId: number, resolve: boolean): Promise<{ id: number; changed: boolean }> {
   const db = getDb();
   const { access, revision, row } = await loadComment(db, viewer, commentId);
-  if (!can(access.actor, "comment.resolve")) throw new ForbiddenError("Only the studio resolves or reopens comment threads.");
+  if (!can(access.actor, "comment.resolve")) throw new ForbiddenError(STUDIO_RESOLVES);
   const threadId = row.parentId ?? row.id;
   return db.transaction(async (tx) => {
-    await lockCommission(tx, revision.commissionId);
+    await lockedFor(tx, viewer, revision.commissionId, { action: "comment.resolve", refusal: STUDIO_RESOLVES });
     const [root] = await tx.select().from(comments).where(eq(comments.id, threadId));
     if (!root) throw new NotFoundError();
     if ((root.resolvedAt !== null) === resolve) return { id: root.id, changed: false };

@@ -1,13 +1,13 @@
 import "server-only";
-import { and, asc, desc, eq, inArray, or } from "drizzle-orm";
+import { and, asc, desc, eq, gt, inArray, or } from "drizzle-orm";
 import { getDb, type Db } from "@/db/client";
-import { commissionMembers, commissions, studioMembers, studios, trailEvents, users } from "@/db/schema";
+import { ballots, commissionMembers, commissions, revisions, studioMembers, studios, users } from "@/db/schema";
 import { can, ACTIONS, invitableRoles, type Action, type CommitteeRole } from "@/models/permissions/policy";
 import { commissionSchema, fieldErrors } from "@/models/schemas/people";
 import { ballotRulesSchema, type BallotRules } from "@/models/ballot";
-import { appendTrail, lockCommission, type Tx } from "../trail";
-import { ConflictError, ValidationError } from "../errors";
-import { authorize, loadAccess } from "./access";
+import { appendTrail } from "../trail";
+import { ValidationError } from "../errors";
+import { loadAccess } from "./access";
 import { requireStudio, type Viewer } from "./viewer";
 import { STAGE_LABELS } from "@/models/stages";
 
@@ -34,7 +34,12 @@ export interface PersonDto {
 export interface CommissionDto extends CommissionSummary {
   studioId: number;
   rules: BallotRules;
+  /** The chair may change the rules now (no ballot is open). */
   rulesEditable: boolean;
+  /** The chair has confirmed the rules (the studio only proposes them); no ballot before that. */
+  rulesConfirmed: boolean;
+  /** The ballot open now on any revision: while it is, who may vote cannot change. */
+  openBallot: { number: number; closesAt: string | null } | null;
   people: PersonDto[];
   you: { studioRole: string | null; committeeRole: string | null; treasurer: boolean; can: Partial<Record<Action, boolean>>; invitable: CommitteeRole[] };
   createdAt: string;
@@ -83,6 +88,7 @@ export async function getCommission(viewer: Viewer, commissionId: number): Promi
   const { commission: c, actor } = await loadAccess(db, viewer, commissionId);
   const [studio] = await db.select().from(studios).where(eq(studios.id, c.studioId));
   const people = await listPeopleRows(commissionId, c.studioId);
+  const open = await openBallotNow(db, commissionId);
   const canMap: Partial<Record<Action, boolean>> = {};
   for (const a of ACTIONS) canMap[a] = can(actor, a);
   return {
@@ -90,11 +96,21 @@ export async function getCommission(viewer: Viewer, commissionId: number): Promi
     stageLabel: STAGE_LABELS[c.stage], studioName: studio.name, studioId: c.studioId,
     yourRole: actor.committeeRole ?? actor.studioRole ?? "",
     rules: rulesOf(c),
-    rulesEditable: can(actor, "rules.edit") && !(await rulesLocked(commissionId)),
+    rulesEditable: can(actor, "rules.edit") && !open,
+    rulesConfirmed: c.rulesConfirmedAt !== null,
+    openBallot: open ? { number: open.number, closesAt: open.closesAt?.toISOString() ?? null } : null,
     people,
     you: { studioRole: actor.studioRole, committeeRole: actor.committeeRole, treasurer: actor.treasurer, can: canMap, invitable: invitableRoles(actor) },
     createdAt: c.createdAt.toISOString(),
   };
+}
+
+/** The ballot open on the commission now, if any (one past its closing time does not count). */
+async function openBallotNow(db: Db, commissionId: number) {
+  const [b] = await db.select({ number: revisions.number, closesAt: ballots.closesAt }).from(ballots)
+    .innerJoin(revisions, eq(revisions.id, ballots.revisionId))
+    .where(and(eq(ballots.commissionId, commissionId), eq(ballots.status, "open"), gt(ballots.closesAt, new Date()))).limit(1);
+  return b ?? null;
 }
 
 async function listPeopleRows(commissionId: number, studioId: number): Promise<PersonDto[]> {
@@ -120,16 +136,10 @@ async function listPeopleRows(commissionId: number, studioId: number): Promise<P
   ];
 }
 
-/** Rules are fixed once the first ballot (electronic or at a meeting) has been opened or recorded. */
-export async function rulesLocked(commissionId: number, db: Db | Tx = getDb()): Promise<boolean> {
-  const rows = await db
-    .select({ id: trailEvents.id })
-    .from(trailEvents)
-    .where(and(eq(trailEvents.commissionId, commissionId), inArray(trailEvents.action, ["ballot opened", "meeting vote recorded"])))
-    .limit(1);
-  return rows.length > 0;
-}
-
+/**
+ * The studio creates a commission and may propose the committee's rules with it; they stand as proposed
+ * until the chair confirms or changes them (lib/dal/rules.ts), and no ballot is held before that.
+ */
 export async function createCommission(viewer: Viewer, input: unknown, rulesInput?: unknown): Promise<{ id: number }> {
   const studio = requireStudio(viewer);
   const parsed = commissionSchema.safeParse(input);
@@ -145,42 +155,8 @@ export async function createCommission(viewer: Viewer, input: unknown, rulesInpu
     }).$returningId();
     await appendTrail(tx, {
       commissionId: res.id, actorId: viewer.id, actorRole: studio.role, action: "commission created",
-      subjectType: "commission", subjectId: res.id, payload: { ...parsed.data, rules: r },
+      subjectType: "commission", subjectId: res.id, payload: { ...parsed.data, rules: r, rulesStatus: "proposed by the studio" },
     });
     return { id: res.id };
-  });
-}
-
-export async function updateRules(viewer: Viewer, commissionId: number, input: unknown): Promise<BallotRules> {
-  const db = getDb();
-  const access = await authorize(db, viewer, commissionId, "rules.edit");
-  const parsed = ballotRulesSchema.safeParse(input);
-  if (!parsed.success) throw new ValidationError(fieldErrors(parsed.error));
-  const next = { ...parsed.data, electronicAuthority: parsed.data.electronicAuthority?.trim() || null };
-  if (typeof next.quorum === "number") {
-    const voters = await db.select({ id: commissionMembers.id }).from(commissionMembers)
-      .where(and(eq(commissionMembers.commissionId, commissionId), inArray(commissionMembers.role, next.chairVotes ? ["member", "chair"] : ["member"])));
-    if (next.quorum > voters.length) throw new ValidationError({ quorum: `The quorum cannot be more than the ${voters.length} voting members.` });
-  }
-  return updateRulesTx(viewer, access, next);
-}
-
-async function updateRulesTx(viewer: Viewer, access: Awaited<ReturnType<typeof authorize>>, next: BallotRules) {
-  const db = getDb();
-  const commissionId = access.commission.id;
-  return db.transaction(async (tx) => {
-    await lockCommission(tx, commissionId);
-    if (await rulesLocked(commissionId, tx)) throw new ConflictError("The ballot rules are fixed once a ballot has been opened.");
-    const [fresh] = await tx.select().from(commissions).where(eq(commissions.id, commissionId));
-    const before = rulesOf(fresh);
-    await tx.update(commissions).set({
-      quorum: String(next.quorum), threshold: next.threshold, chairVotes: next.chairVotes,
-      electronicAuthority: next.electronicAuthority, updatedAt: new Date(),
-    }).where(eq(commissions.id, commissionId));
-    await appendTrail(tx, {
-      commissionId, actorId: viewer.id, actorRole: access.actingRole, action: "ballot rules changed",
-      subjectType: "commission", subjectId: commissionId, payload: { before, after: next },
-    });
-    return next;
   });
 }

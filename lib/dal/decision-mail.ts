@@ -3,6 +3,7 @@ import { eq } from "drizzle-orm";
 import { commissionMembers, commissions, studioMembers, users } from "@/db/schema";
 import type { DecisionDto } from "@/models/decision";
 import { formatHead } from "@/models/trail/head";
+import { howVoted, rollWords } from "@/models/decision/tally-words";
 import { env } from "../env";
 import { enqueueMail } from "../outbox";
 import type { Tx } from "../trail";
@@ -10,8 +11,7 @@ import type { Tx } from "../trail";
 function voteLine(d: DecisionDto): string {
   const t = d.tally;
   if (!t) return "No ballot was held on this revision.";
-  const how = t.kind === "meeting" ? `the vote taken at the meeting of ${t.meetingDate}` : "the electronic ballot";
-  return `${t.outcomeLabel} in ${how}: ${t.inFavour} in favour, ${t.against} against, ${t.abstain} abstaining, of ${t.votingMembers} voting members.`;
+  return `${t.outcomeLabel} in ${howVoted(t)}: ${t.inFavour} in favour, ${t.against} against, ${t.abstain} abstaining, of ${t.votingMembers} voting members.\nThe roll: ${rollWords(t)}.`;
 }
 
 /** The decision's notice, text only, to everyone on the commission: the committee and the studio. */

@@ -8,20 +8,22 @@ import {
   type DecisionDto, type DecisionOutcome, type DecisionStateDto, type DecisionTallyDto,
 } from "@/models/decision";
 import { can } from "@/models/permissions/policy";
-import { env } from "../env";
 import { ConflictError, ForbiddenError, FreshSignInRequired, ValidationError } from "../errors";
-import { appendTrail, lockCommission, type Tx } from "../trail";
-import { closeDueBallots, revisionStateRefusal, type BallotRow } from "./ballot-core";
+import { appendTrail, type Tx } from "../trail";
+import { closeDueBallots, loadRoll, revisionStateRefusal, type BallotRow } from "./ballot-core";
+import { freshness, lockedFor } from "./locked";
 import { mailDecision } from "./decision-mail";
 import { loadRevisionById } from "./revision-access";
-import { sessionStartedAt, type Viewer } from "./viewer";
+import type { Viewer } from "./viewer";
 
-function tallyOf(b: BallotRow | undefined): DecisionTallyDto | null {
+/** The frozen result of a ballot, with the roll it was counted on. */
+async function tallyOf(db: Db | Tx, b: BallotRow | undefined): Promise<DecisionTallyDto | null> {
   const r = b?.result as FrozenResult | null | undefined;
   if (!b || !r) return null;
+  const roll = (await loadRoll(db, b.id)).map((p) => ({ name: p.name, role: p.role }));
   return {
-    ballotId: b.id, kind: b.kind, meetingDate: b.meetingDate, inFavour: r.inFavour, against: r.against, abstain: r.abstain,
-    votingMembers: r.votingMembers, outcome: r.outcome, outcomeLabel: BALLOT_OUTCOME_LABELS[r.outcome],
+    ballotId: b.id, kind: b.kind, meetingDate: b.meetingDate, minutesRef: b.minutesRef, inFavour: r.inFavour, against: r.against, abstain: r.abstain,
+    votingMembers: r.votingMembers, outcome: r.outcome, outcomeLabel: BALLOT_OUTCOME_LABELS[r.outcome], roll,
   };
 }
 
@@ -34,12 +36,8 @@ const basisOf = (number: number, b: BallotRow | undefined) => ({
   number, latest: b ? { status: b.status, outcome: (b.result as FrozenResult | null)?.outcome ?? null } : null,
 });
 
-/** How long ago the viewer signed in, against the window for signing a decision. */
-async function freshness(viewer: Viewer) {
-  const started = await sessionStartedAt(viewer);
-  const needed = !started || Date.now() - started.getTime() > env.freshSignInSeconds * 1000;
-  return { needed, signedInAt: started?.toISOString() ?? null };
-}
+const CHAIR_ONLY = "Only the chair records the committee's decision.";
+const FRESH = "You signed in more than 10 minutes ago. Before you record a decision, confirm it is you with a new sign-in link.";
 
 function isDuplicate(err: unknown): boolean {
   const e = err as { code?: string; errno?: number; cause?: { code?: string; errno?: number } };
@@ -54,7 +52,7 @@ function isDuplicate(err: unknown): boolean {
 export async function recordDecision(viewer: Viewer, revisionId: number, input: unknown): Promise<DecisionDto> {
   const db = getDb();
   const { access, revision } = await loadRevisionById(db, viewer, revisionId);
-  if (!can(access.actor, "decision.record")) throw new ForbiddenError("Only the chair records the committee's decision.");
+  if (!can(access.actor, "decision.record")) throw new ForbiddenError(CHAIR_ONLY);
   const parsed = parseDecision(input);
   if (!parsed.ok) throw new ValidationError(parsed.errors);
   const d = parsed.data;
@@ -64,12 +62,11 @@ export async function recordDecision(viewer: Viewer, revisionId: number, input: 
   if (state) throw new ConflictError(state);
   const early = decisionRefusal(d.outcome, basisOf(revision.number, await latestBallot(db, revisionId)));
   if (early) throw new ValidationError({ outcome: early });
-  if ((await freshness(viewer)).needed) {
-    throw new FreshSignInRequired("You signed in more than 10 minutes ago. Before you record a decision, confirm it is you with a new sign-in link.");
-  }
+  if ((await freshness(viewer)).needed) throw new FreshSignInRequired(FRESH);
   try {
     return await db.transaction(async (tx) => {
-      await lockCommission(tx, revision.commissionId);
+      // Role, freshness and state again under the lock: a chair demoted a moment ago is refused here.
+      const locked = await lockedFor(tx, viewer, revision.commissionId, { action: "decision.record", refusal: CHAIR_ONLY, fresh: { message: FRESH } });
       const [r] = await tx.select().from(revisions).where(eq(revisions.id, revisionId));
       const [already] = await tx.select({ id: decisions.id }).from(decisions).where(eq(decisions.revisionId, revisionId));
       if (already) throw new ConflictError(`Revision ${r.number} has already been decided.`);
@@ -78,9 +75,9 @@ export async function recordDecision(viewer: Viewer, revisionId: number, input: 
       const b = await latestBallot(tx, revisionId);
       const why = decisionRefusal(d.outcome, basisOf(r.number, b));
       if (why) throw new ValidationError({ outcome: why });
-      const tally = tallyOf(b);
+      const tally = await tallyOf(tx, b);
       const now = new Date();
-      const [c] = await tx.select().from(commissions).where(eq(commissions.id, r.commissionId));
+      const c = locked.commission;
       const [res] = await tx.insert(decisions).values({
         revisionId, commissionId: r.commissionId, outcome: d.outcome, conditions: d.conditions, statement: d.statement,
         ballotId: tally?.ballotId ?? null, contentHash: r.contentHash!, recordedBy: viewer.id, recordedAt: now,
@@ -88,7 +85,7 @@ export async function recordDecision(viewer: Viewer, revisionId: number, input: 
       await tx.update(revisions).set({ state: "decided", updatedAt: now }).where(eq(revisions.id, revisionId));
       const label = DECISION_LABELS[d.outcome];
       await appendTrail(tx, {
-        commissionId: r.commissionId, actorId: viewer.id, actorRole: access.actingRole, action: "decision recorded",
+        commissionId: r.commissionId, actorId: viewer.id, actorRole: locked.actingRole, action: "decision recorded",
         subjectType: "revision", subjectId: revisionId,
         payload: { number: r.number, outcome: d.outcome, outcomeLabel: label, conditions: d.conditions, statement: d.statement, tally, ballotId: tally?.ballotId ?? null, contentHash: r.contentHash },
       });
@@ -96,7 +93,7 @@ export async function recordDecision(viewer: Viewer, revisionId: number, input: 
       if (to !== c.stage) {
         await tx.update(commissions).set({ stage: to, updatedAt: now }).where(eq(commissions.id, c.id));
         await appendTrail(tx, {
-          commissionId: c.id, actorId: viewer.id, actorRole: access.actingRole, action: "stage changed",
+          commissionId: c.id, actorId: viewer.id, actorRole: locked.actingRole, action: "stage changed",
           subjectType: "commission", subjectId: c.id, payload: { from: c.stage, to, reason: `Revision ${r.number}: ${label.toLowerCase()}` },
         });
       }
@@ -126,7 +123,7 @@ export async function getDecision(viewer: Viewer, revisionId: number): Promise<D
     decision = {
       id: row.id, revisionId, number: r.number, outcome: row.outcome, outcomeLabel: DECISION_LABELS[row.outcome],
       conditions: row.conditions, statement: row.statement, contentHash: row.contentHash,
-      recordedByName: who?.name ?? who?.email ?? "The chair", recordedAt: row.recordedAt.toISOString(), tally: tallyOf(b),
+      recordedByName: who?.name ?? who?.email ?? "The chair", recordedAt: row.recordedAt.toISOString(), tally: await tallyOf(db, b),
     };
   }
   const latest = await latestBallot(db, revisionId);
@@ -136,7 +133,7 @@ export async function getDecision(viewer: Viewer, revisionId: number): Promise<D
   const fresh = mayRecord ? await freshness(viewer) : { needed: false, signedInAt: null };
   return {
     revisionId, number: r.number, revisionState: r.state, contentHash: r.contentHash, decision,
-    basis: latest?.status === "closed" ? tallyOf(latest) : null, refusals,
+    basis: latest?.status === "closed" ? await tallyOf(db, latest) : null, refusals,
     you: { mayRecord, freshSignInNeeded: fresh.needed, signedInAt: fresh.signedInAt },
   };
 }
@@ -144,6 +141,6 @@ export async function getDecision(viewer: Viewer, revisionId: number): Promise<D
 /** For the fresh sign-in link: only the chair of this revision's commission, and only while it can be decided. */
 export async function decisionSignInTarget(viewer: Viewer, revisionId: number): Promise<{ email: string; path: string }> {
   const { access, revision } = await loadRevisionById(getDb(), viewer, revisionId);
-  if (!can(access.actor, "decision.record")) throw new ForbiddenError("Only the chair records the committee's decision.");
+  if (!can(access.actor, "decision.record")) throw new ForbiddenError(CHAIR_ONLY);
   return { email: viewer.email, path: `/commissions/${revision.commissionId}/revisions/${revision.number}` };
 }

@@ -5,10 +5,13 @@ import { commissionMembers, studioMembers, users } from "@/db/schema";
 import { can, ROLE_LABELS } from "@/models/permissions/policy";
 import { fieldErrors, inviteSchema } from "@/models/schemas/people";
 import { env } from "../env";
-import { ForbiddenError, ValidationError } from "../errors";
+import { ConflictError, ForbiddenError, ValidationError } from "../errors";
 import { enqueueMail } from "../outbox";
-import { appendTrail, lockCommission } from "../trail";
+import { changesVotingRights } from "@/models/ballot/tally";
+import { appendTrail, type Tx } from "../trail";
 import { loadAccess } from "./access";
+import { closeDueBallots, openBallotOnCommission } from "./ballot-core";
+import { lockedFor } from "./locked";
 import type { Viewer } from "./viewer";
 
 export interface InviteResult {
@@ -27,6 +30,7 @@ export async function invitePerson(viewer: Viewer, commissionId: number, input: 
   const { email, name, role, treasurer } = parsed.data;
   const db = getDb();
   const access = await loadAccess(db, viewer, commissionId);
+  await closeDueBallots({ commissionId });
   const needed = role === "adviser" ? "people.inviteAdviser" : "people.inviteCommittee";
   if (!can(access.actor, needed)) {
     throw new ForbiddenError(role === "adviser" ? "Only the studio or the chair may invite advisers." : "Only the studio may invite chairs and members.");
@@ -34,7 +38,7 @@ export async function invitePerson(viewer: Viewer, commissionId: number, input: 
   if (treasurer && role === "adviser") throw new ValidationError({ treasurer: "An adviser cannot be the treasurer." });
 
   return db.transaction(async (tx) => {
-    await lockCommission(tx, commissionId);
+    const locked = await lockedFor(tx, viewer, commissionId, { action: needed, refusal: role === "adviser" ? "Only the studio or the chair may invite advisers." : "Only the studio may invite chairs and members." });
     let [user] = await tx.select().from(users).where(eq(users.email, email)).limit(1);
     if (!user) {
       const uid = crypto.randomUUID();
@@ -42,17 +46,18 @@ export async function invitePerson(viewer: Viewer, commissionId: number, input: 
       [user] = await tx.select().from(users).where(eq(users.id, uid));
     }
     const staff = await tx.select({ id: studioMembers.id }).from(studioMembers)
-      .where(and(eq(studioMembers.studioId, access.commission.studioId), eq(studioMembers.userId, user.id)));
+      .where(and(eq(studioMembers.studioId, locked.commission.studioId), eq(studioMembers.userId, user.id)));
     if (staff.length) throw new ValidationError({ email: "That person is on the studio's staff; the committee is the client's side." });
 
     const [existing] = await tx.select().from(commissionMembers)
       .where(and(eq(commissionMembers.commissionId, commissionId), eq(commissionMembers.userId, user.id))).limit(1);
+    if (existing?.role === role && existing.treasurer === treasurer) return { userId: user.id, created: false, roleChanged: false };
+    if (existing && !can(locked.actor, "people.inviteCommittee")) throw new ForbiddenError("Only the studio may change a person's role.");
+    await refuseDuringBallot(tx, commissionId, existing?.role ?? null, role);
     if (existing) {
-      if (existing.role === role && existing.treasurer === treasurer) return { userId: user.id, created: false, roleChanged: false };
-      if (!can(access.actor, "people.inviteCommittee")) throw new ForbiddenError("Only the studio may change a person's role.");
       await tx.update(commissionMembers).set({ role, treasurer }).where(eq(commissionMembers.id, existing.id));
       await appendTrail(tx, {
-        commissionId, actorId: viewer.id, actorRole: access.actingRole, action: "role changed",
+        commissionId, actorId: viewer.id, actorRole: locked.actingRole, action: "role changed",
         subjectType: "person", subjectId: user.id,
         payload: { email, from: { role: existing.role, treasurer: existing.treasurer }, to: { role, treasurer } },
       });
@@ -60,7 +65,7 @@ export async function invitePerson(viewer: Viewer, commissionId: number, input: 
     }
     await tx.insert(commissionMembers).values({ commissionId, userId: user.id, role, treasurer, invitedBy: viewer.id });
     await appendTrail(tx, {
-      commissionId, actorId: viewer.id, actorRole: access.actingRole, action: "person invited",
+      commissionId, actorId: viewer.id, actorRole: locked.actingRole, action: "person invited",
       subjectType: "person", subjectId: user.id, payload: { email, name: user.name ?? name, role, treasurer },
     });
     await enqueueMail(tx, [{
@@ -75,3 +80,16 @@ export async function invitePerson(viewer: Viewer, commissionId: number, input: 
   });
 }
 
+
+/** The message for a change of voting rights while a ballot is open: the roll is fixed until it closes. */
+export function duringBallotRefusal(b: { number: number; closesAt: Date | null }): string {
+  const when = b.closesAt ? ` (it closes ${b.closesAt.toISOString().slice(0, 16).replace("T", " ")} UTC)` : "";
+  return `A ballot on Revision ${b.number} is open${when}. Who may vote is fixed while it is open, so changes to voting rights are refused until it closes; nothing was changed.`;
+}
+
+/** Refuses a change to or from member or chair while a ballot is open on the commission. */
+export async function refuseDuringBallot(tx: Tx, commissionId: number, before: string | null, after: string | null): Promise<void> {
+  if (!changesVotingRights(before, after)) return;
+  const open = await openBallotOnCommission(tx, commissionId);
+  if (open) throw new ConflictError(duringBallotRefusal(open));
+}

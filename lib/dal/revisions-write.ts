@@ -10,10 +10,15 @@ import { ConflictError, ForbiddenError, ValidationError } from "../errors";
 import { can } from "@/models/permissions/policy";
 import { closeBallotTx } from "./ballot-core";
 import { enqueueMail } from "../outbox";
-import { appendTrail, lockCommission, type Tx } from "../trail";
+import { appendTrail, type Tx } from "../trail";
 import { authorize } from "./access";
+import { draftChanged } from "./draft-trail";
+import { lockedFor } from "./locked";
 import { loadRevision } from "./revision-access";
 import type { Viewer } from "./viewer";
+
+const STUDIO_EDITS = "Only the studio edits revisions.";
+const STUDIO_CIRCULATES = "Only the studio circulates revisions.";
 
 function fontErrors(fieldErrors: Record<string, string[] | undefined>, formErrors: string[]): Record<string, string> {
   const out: Record<string, string> = {};
@@ -32,17 +37,17 @@ function checkNote(note: unknown): string {
 /** Starts the next numbered revision as a draft, from the latest revision's parameters (or the defaults). */
 export async function createDraft(viewer: Viewer, commissionId: number, input: { note?: unknown } = {}): Promise<{ id: number; number: number }> {
   const db = getDb();
-  const access = await authorize(db, viewer, commissionId, "revision.draft");
+  await authorize(db, viewer, commissionId, "revision.draft");
   const note = checkNote(input.note);
   return db.transaction(async (tx) => {
-    await lockCommission(tx, commissionId);
+    const locked = await lockedFor(tx, viewer, commissionId, { action: "revision.draft", refusal: STUDIO_EDITS });
     const [latest] = await tx.select().from(revisions).where(eq(revisions.commissionId, commissionId)).orderBy(desc(revisions.number)).limit(1);
     if (latest?.state === "draft") throw new ConflictError(`Revision ${latest.number} is still a draft; finish and circulate it first.`);
     const number = (latest?.number ?? 0) + 1;
     const params = (latest?.params ?? defaultFontParameters) as Record<string, unknown>;
     const [res] = await tx.insert(revisions).values({ commissionId, number, state: "draft", params, note, createdBy: viewer.id }).$returningId();
     await appendTrail(tx, {
-      commissionId, actorId: viewer.id, actorRole: access.actingRole, action: "revision drafted",
+      commissionId, actorId: viewer.id, actorRole: locked.actingRole, action: "revision drafted",
       subjectType: "revision", subjectId: res.id, payload: { number, basedOn: latest?.number ?? null },
     });
     return { id: res.id, number };
@@ -53,7 +58,7 @@ export async function createDraft(viewer: Viewer, commissionId: number, input: {
 export async function updateDraft(viewer: Viewer, commissionId: number, number: number, input: { params?: unknown; note?: unknown }) {
   const db = getDb();
   const { access, revision } = await loadRevision(db, viewer, commissionId, number);
-  if (!can(access.actor, "revision.draft")) throw new ForbiddenError("Only the studio edits revisions.");
+  if (!can(access.actor, "revision.draft")) throw new ForbiddenError(STUDIO_EDITS);
   const frozen = editRefusal(revision.state, revision.number);
   if (frozen) throw new ConflictError(frozen);
   const noteInput = input.note === undefined ? undefined : checkNote(input.note);
@@ -61,7 +66,7 @@ export async function updateDraft(viewer: Viewer, commissionId: number, number: 
     throw new ValidationError({ params: "The model's parameters must be an object." });
   }
   return db.transaction(async (tx) => {
-    await lockCommission(tx, commissionId);
+    const locked = await lockedFor(tx, viewer, commissionId, { action: "revision.draft", refusal: STUDIO_EDITS });
     const [fresh] = await tx.select().from(revisions).where(eq(revisions.id, revision.id));
     const refusal = editRefusal(fresh.state, fresh.number);
     if (refusal) throw new ConflictError(refusal);
@@ -75,13 +80,7 @@ export async function updateDraft(viewer: Viewer, commissionId: number, number: 
     const changed = Object.keys(params).filter((k) => JSON.stringify(params[k]) !== JSON.stringify(fresh.params[k]));
     if (!changed.length && note === fresh.note) return { changed: [] as string[] };
     await tx.update(revisions).set({ params, note, updatedAt: new Date() }).where(eq(revisions.id, revision.id));
-    // A draft is the studio's alone, and the trail is read by the whole commission: record which values
-    // changed, not what they became (the frozen content is hashed into the trail at circulation).
-    await appendTrail(tx, {
-      commissionId, actorId: viewer.id, actorRole: access.actingRole, action: "revision updated",
-      subjectType: "revision", subjectId: revision.id,
-      payload: { number, changed, noteChanged: note !== fresh.note },
-    });
+    await draftChanged(tx, { commissionId, actorId: viewer.id, actorRole: locked.actingRole, revisionId: revision.id, number });
     return { changed };
   });
 }
@@ -94,9 +93,9 @@ export async function updateDraft(viewer: Viewer, commissionId: number, number: 
 export async function circulate(viewer: Viewer, commissionId: number, number: number): Promise<{ contentHash: string }> {
   const db = getDb();
   const { access, revision } = await loadRevision(db, viewer, commissionId, number);
-  if (!can(access.actor, "revision.circulate")) throw new ForbiddenError("Only the studio circulates revisions.");
+  if (!can(access.actor, "revision.circulate")) throw new ForbiddenError(STUDIO_CIRCULATES);
   return db.transaction(async (tx) => {
-    await lockCommission(tx, commissionId);
+    const locked = await lockedFor(tx, viewer, commissionId, { action: "revision.circulate", refusal: STUDIO_CIRCULATES });
     const [fresh] = await tx.select().from(revisions).where(eq(revisions.id, revision.id));
     const refusal = editRefusal(fresh.state, fresh.number);
     if (refusal) throw new ConflictError(refusal);
@@ -111,11 +110,13 @@ export async function circulate(viewer: Viewer, commissionId: number, number: nu
     });
     const contentHash = revisionContentHash(content);
     const now = new Date();
-    await supersedePrevious(tx, viewer, access.actingRole, commissionId, number, now);
+    await supersedePrevious(tx, viewer, locked.actingRole, commissionId, number, now);
     await tx.update(revisions).set({ state: "circulated", figures, contentHash, circulatedBy: viewer.id, circulatedAt: now, updatedAt: now }).where(eq(revisions.id, fresh.id));
+    // What the draft held enters the trail now, when the committee may see it: the hash and the files.
     await appendTrail(tx, {
-      commissionId, actorId: viewer.id, actorRole: access.actingRole, action: "revision circulated",
-      subjectType: "revision", subjectId: fresh.id, payload: { number, contentHash, attachments: files.length },
+      commissionId, actorId: viewer.id, actorRole: locked.actingRole, action: "revision circulated",
+      subjectType: "revision", subjectId: fresh.id,
+      payload: { number, contentHash, attachments: files.length, files: files.map((f) => ({ name: f.name, kind: f.kind, sha256: f.sha256 })) },
     });
     await mailCommittee(tx, commissionId, fresh.id, number, fresh.note);
     return { contentHash };

@@ -3,7 +3,8 @@ import { eq } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import { commissions, STAGES } from "@/db/schema";
 import { ValidationError } from "../errors";
-import { appendTrail, lockCommission } from "../trail";
+import { appendTrail } from "../trail";
+import { lockedFor } from "./locked";
 import { authorize } from "./access";
 import type { Viewer } from "./viewer";
 
@@ -17,7 +18,7 @@ export async function changeStage(viewer: Viewer, commissionId: number, stage: s
     throw new ValidationError({ stage: "Choose brief, concept, design development, on hold or withdrawn; approval comes from the committee's decision." });
   }
   await db.transaction(async (tx) => {
-    await lockCommission(tx, commissionId);
+    await lockedFor(tx, viewer, commissionId, { action: "commission.changeStage" });
     const [c] = await tx.select({ stage: commissions.stage }).from(commissions).where(eq(commissions.id, commissionId));
     if (c.stage === stage) return;
     await tx.update(commissions).set({ stage: stage as (typeof STAGES)[number], updatedAt: new Date() }).where(eq(commissions.id, commissionId));

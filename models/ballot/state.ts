@@ -35,7 +35,12 @@ export interface BallotDto {
   closesAt: string | null;
   closedAt: string | null;
   meetingDate: string | null;
+  /** For a meeting vote: where the minutes are. */
+  minutesRef: string | null;
 }
+
+/** How every view marks a result the chair entered from a meeting's minutes. */
+export const FROM_MEETING = "recorded by the chair from a meeting";
 
 export interface TallyDto {
   inFavour: number;
@@ -77,6 +82,13 @@ export interface BallotStateDto {
   electronicAllowed: boolean;
   /** The voting members now, for the chair's per-member meeting form. */
   votingMembers: { userId: string; name: string; role: "chair" | "member" }[];
+  /** The roll of the ballot shown (fixed when it opened), or null when there is none. */
+  roll: { userId: string; name: string; role: "chair" | "member" }[] | null;
+  /** False until the chair confirms the rules the studio proposed; no ballot before then. */
+  rulesConfirmed: boolean;
+  /** Why the chair may not record a meeting vote / open a ballot now (null: may, or not the chair's to ask). */
+  meetingRefusal: string | null;
+  openRefusal: string | null;
   you: { isChair: boolean; canOpen: boolean; canClose: boolean; canRecordMeeting: boolean };
   /** Earlier ballots on the same revision, newest first. */
   earlier: { id: number; kind: "electronic" | "meeting"; status: "open" | "closed" | "withdrawn"; outcomeLabel: string | null; closedAt: string | null }[];

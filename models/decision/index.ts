@@ -95,6 +95,10 @@ export interface DecisionTallyDto {
   votingMembers: number;
   outcome: BallotOutcome;
   outcomeLabel: string;
+  /** For a meeting vote: where the minutes are. */
+  minutesRef: string | null;
+  /** Who was entitled to vote (fixed when the ballot opened); empty when not recorded. */
+  roll: { name: string; role: "chair" | "member" }[];
 }
 
 export interface DecisionDto {

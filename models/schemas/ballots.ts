@@ -63,7 +63,16 @@ export interface MeetingVoteInput {
   counts: { inFavour: number; against: number; abstain: number };
   /** Present when each member's vote was recorded, not only the counts. */
   perMember: { userId: string; choice: VoteChoice }[] | null;
+  /** Where the minutes are: the minute book and page, a file name or a link. */
+  minutesRef: string;
 }
+
+export const MINUTES_REF_MAX = 500;
+const minutesRefSchema = z
+  .string({ error: "Say where the minutes of the meeting are (for example the minute book and page)." })
+  .trim()
+  .min(1, "Say where the minutes of the meeting are (for example the minute book and page).")
+  .max(MINUTES_REF_MAX, `Keep the reference to the minutes under ${MINUTES_REF_MAX} characters.`);
 
 /** A real calendar date written YYYY-MM-DD, else null. */
 export function calendarDate(s: unknown): Date | null {
@@ -85,6 +94,8 @@ export function parseMeetingVote(input: unknown, now: Date): Parsed<MeetingVoteI
   else if ((o.meetingDate as string) > latestPossibleToday(now)) errors.meetingDate = "The meeting date cannot be in the future.";
   const motion = motionSchema.safeParse(o.motion);
   if (!motion.success) errors.motion = motion.error.issues[0].message;
+  const minutes = minutesRefSchema.safeParse(o.minutesRef);
+  if (!minutes.success) errors.minutesRef = minutes.error.issues[0].message;
   const hasCounts = o.counts !== undefined && o.counts !== null;
   const hasPer = o.perMember !== undefined && o.perMember !== null;
   let counts = { inFavour: 0, against: 0, abstain: 0 };
@@ -106,5 +117,5 @@ export function parseMeetingVote(input: unknown, now: Date): Parsed<MeetingVoteI
     }
   }
   if (Object.keys(errors).length) return { ok: false, errors };
-  return { ok: true, data: { meetingDate: o.meetingDate as string, motion: motion.data || null, counts, perMember } };
+  return { ok: true, data: { meetingDate: o.meetingDate as string, motion: motion.data || null, counts, perMember, minutesRef: minutes.data! } };
 }

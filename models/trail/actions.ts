@@ -12,6 +12,7 @@ export const TRAIL_ACTIONS = [
   "role changed",
   "person removed",
   "ballot rules changed",
+  "ballot rules confirmed",
   "stage changed",
   "studio settings changed",
   // revisions

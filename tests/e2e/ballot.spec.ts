@@ -8,11 +8,8 @@ void _ignored;
 /** A commission of the test's own (so the desktop and phone runs never supersede each other's revision), circulated. */
 async function ownCirculatedCommission(page: Page): Promise<{ title: string; commissionId: number }> {
   const { title, commissionId } = await newCommissionViaForm(page, "Font for the south porch", "St Tessa's — Building Committee", "St Tessa's, Polgarrow: the south porch");
-
-  await page.goto(`/commissions/${commissionId}/rules`);
-  await page.getByLabel("Authority for electronic ballots").fill("Standing order 4: the committee may vote by electronic ballot between meetings");
-  await page.getByRole("button", { name: "Save the rules" }).click();
-  await expect(page).toHaveURL(new RegExp(`/commissions/${commissionId}$`));
+  // The rules are the committee's: the studio cannot open the rules page.
+  expect((await page.goto(`/commissions/${commissionId}/rules`))?.status()).toBe(404);
 
   await page.goto(`/commissions/${commissionId}/revisions/new`);
   await page.getByLabel("What changed and why (you can finish this later)").fill("First proposal: a cast bowl on a ground glass foot, three engravings.");
@@ -22,6 +19,18 @@ async function ownCirculatedCommission(page: Page): Promise<{ title: string; com
   await page.getByRole("button", { name: "Yes, freeze and circulate Revision 1" }).click();
   await expect(page).toHaveURL(new RegExp(`/commissions/${commissionId}/revisions/1$`));
   return { title, commissionId };
+}
+
+/** The chair sets the authority for electronic ballots on the rules page, which also confirms the rules. */
+async function chairSetsRules(chair: Page, commissionId: number) {
+  await chair.goto(`/commissions/${commissionId}`);
+  await expect(chair.getByTestId("rules-proposed")).toBeVisible();
+  await chair.goto(`/commissions/${commissionId}/rules`);
+  await expect(chair.getByTestId("confirm-rules")).toBeVisible();
+  await chair.getByLabel("Authority for electronic ballots").fill("Standing order 4: the committee may vote by electronic ballot between meetings");
+  await chair.getByRole("button", { name: "Save the rules" }).click();
+  await expect(chair).toHaveURL(new RegExp(`/commissions/${commissionId}$`));
+  await expect(chair.getByTestId("rules-proposed")).toHaveCount(0);
 }
 
 /** A member on a phone of their own: signs in, opens the revision and votes (and may change their mind). */
@@ -56,6 +65,7 @@ test("the chair opens a ballot, three members vote from phones, the chair record
   const chairCtx = await browser.newContext({ baseURL });
   const chair = await chairCtx.newPage();
   await signInAs(chair, chairEmail);
+  await chairSetsRules(chair, commissionId);
   await chair.goto(path);
   const panel = chair.getByTestId("ballot-panel");
   await expect(panel.getByTestId("ballot-rules")).toContainText("Standing order 4");
@@ -75,6 +85,11 @@ test("the chair opens a ballot, three members vote from phones, the chair record
 
   // The chair's tally follows without a reload; then the chair closes the ballot.
   await expect(panel.getByTestId("tally")).toContainText("3 of 3 voting members have voted");
+  await expect(panel.getByTestId("ballot-roll")).toContainText("The roll (3), fixed when the ballot opened");
+
+  // While it is open, who may vote is fixed, and the people page tells the studio so.
+  await page.goto(`/commissions/${commissionId}/people`);
+  await expect(page.getByTestId("roll-fixed-note")).toContainText("A ballot on Revision 1 is open");
   await panel.getByRole("button", { name: "Close the ballot now" }).click();
   await panel.getByRole("button", { name: "Yes, close it" }).click();
   await expect(panel.getByTestId("ballot-result")).toContainText("Carried");
@@ -104,7 +119,7 @@ test("the chair opens a ballot, three members vote from phones, the chair record
   await expect(summary).toHaveAttribute("data-outcome", "approved-as-noted");
   await expect(summary.getByTestId("decision-conditions").getByRole("listitem")).toHaveCount(2);
   await expect(summary).toContainText(hash);
-  await expect(summary).toContainText("Carried by electronic ballot: 3 in favour, 0 against, 0 abstaining, of 3 voting members.");
+  await expect(summary).toContainText("Carried by electronic ballot: 3 in favour, 0 against, 0 abstaining, of 3 voting members. The roll:");
   await chair.screenshot({ path: `.data/screenshots/decision-${info.project.name}.png`, fullPage: true });
 
   // Pressing again changes nothing: one decision.
@@ -144,7 +159,11 @@ test("every ballot and decision route refuses those without the right, and nothi
     await signInAs(p, email);
     return p.request;
   };
-  const chair = await as(await makePerson("chair", { commissionTitle: title }));
+  const chairCtx = await browser.newContext({ baseURL });
+  const chairPage = await chairCtx.newPage();
+  await signInAs(chairPage, await makePerson("chair", { commissionTitle: title }));
+  await chairSetsRules(chairPage, commissionId);
+  const chair = chairPage.request;
   const member = await as(await makePerson("member", { commissionTitle: title }));
   const adviser = await as(await makePerson("adviser", { commissionTitle: title }));
   const outsider = await as(await makePerson("member", { commissionTitle: "Font and cover for the new chapel" }));
@@ -169,7 +188,7 @@ test("every ballot and decision route refuses those without the right, and nothi
   const calls: [string, unknown][] = [
     [`/api/revisions/${rid}/ballot`, { closesAt: new Date(Date.now() + 86_400_000).toISOString() }],
     [`/api/ballots/${bid}/close`, {}],
-    [`/api/revisions/${rid}/meeting-vote`, { meetingDate: today, counts: { inFavour: 1, against: 0, abstain: 0 } }],
+    [`/api/revisions/${rid}/meeting-vote`, { meetingDate: today, minutesRef: "Minute book 1, page 2", counts: { inFavour: 1, against: 0, abstain: 0 } }],
     [`/api/revisions/${rid}/decision`, { outcome: "revise-and-resubmit" }],
     [`/api/revisions/${rid}/decision/sign-in-link`, {}],
   ];

@@ -11,7 +11,8 @@ import { DEMO_RULES } from "@/db/demo";
 import { demoStudioSettings } from "@/models/font";
 import { addAttachment } from "@/lib/dal/attachments";
 import { openBallot } from "@/lib/dal/ballots";
-import { createCommission, updateRules } from "@/lib/dal/commissions";
+import { createCommission } from "@/lib/dal/commissions";
+import { updateRules } from "@/lib/dal/rules";
 import { postComment, resolveThread } from "@/lib/dal/comments";
 import { invitePerson } from "@/lib/dal/people";
 import { circulate, createDraft, updateDraft } from "@/lib/dal/revisions-write";
@@ -96,7 +97,7 @@ async function buildForeign(): Promise<Side> {
   const designer = await viewer(FOREIGN_STAFF[1].email);
   const { id: commissionId } = await createCommission(designer, { title: "Font for the meeting house", clientBody: "Quarry Lane Meeting House — Elders", site: "Quarry Lane, Millbrook Cross" });
   for (const p of FOREIGN_COMMITTEE) await invitePerson(designer, commissionId, p);
-  await updateRules(designer, commissionId, DEMO_RULES);
+  await updateRules(await viewer(FOREIGN_COMMITTEE[0].email), commissionId, DEMO_RULES);
   const side: Side = {
     commissionId, designer, chair: await viewer(FOREIGN_COMMITTEE[0].email), member: await viewer(FOREIGN_COMMITTEE[1].email),
     committee: FOREIGN_COMMITTEE, readable: { revisionId: 0, attachmentId: 0, commentId: 0 }, elsewhereAttachmentId: 0,

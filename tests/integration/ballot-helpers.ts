@@ -52,3 +52,6 @@ export async function signedIn(email: string, minutesAgo: number) {
 }
 
 export const inHours = (h: number) => new Date(Date.now() + h * 3600_000).toISOString();
+
+/** Where a meeting's minutes are, as the chair would give it. */
+export const MINUTES = "Minute book 3, page 41";

@@ -5,7 +5,7 @@ import { castVote, closeBallot, closeDueBallots, getBallotState, openBallot, rec
 import { ConflictError, ForbiddenError, NotFoundError, ValidationError } from "@/lib/errors";
 import { JOBS } from "@/lib/worker";
 import { closeDb, freshDemo, getDb, viewer } from "./db";
-import { PEOPLE, ROLES, circulateNext, events, inHours, snapshot, type Who } from "./ballot-helpers";
+import { MINUTES, PEOPLE, ROLES, circulateNext, events, inHours, snapshot, type Who } from "./ballot-helpers";
 
 let ids: Awaited<ReturnType<typeof freshDemo>>;
 beforeAll(async () => { ids = await freshDemo(); });
@@ -148,7 +148,7 @@ describe("a vote taken at a meeting", () => {
 
   it("only the chair records it, with the counts", async () => {
     rev = await circulateNext(ids.commissionId, "Third engraving moved.");
-    await tryEveryRole(["chair"], async (who) => recordMeetingVote(await as(who), rev.id, { meetingDate: today, counts: { inFavour: 2, against: 0, abstain: 1 } }));
+    await tryEveryRole(["chair"], async (who) => recordMeetingVote(await as(who), rev.id, { meetingDate: today, minutesRef: MINUTES, counts: { inFavour: 2, against: 0, abstain: 1 } }));
     const [m] = await events(ids.commissionId, "meeting vote recorded");
     expect(m.payload).toMatchObject({ number: rev.number, meetingDate: today, inFavour: 2, against: 0, abstain: 1, outcome: "carried", votingMembers: 3, perMember: null });
     const s = await getBallotState(await as("designer"), rev.id);
@@ -160,14 +160,14 @@ describe("a vote taken at a meeting", () => {
   it("refuses bad input by field and changes nothing", async () => {
     const chair = await as("chair");
     const cases: [unknown, string, RegExp][] = [
-      [{ meetingDate: "2099-01-01", counts: { inFavour: 1, against: 0, abstain: 0 } }, "meetingDate", /future/],
-      [{ meetingDate: "2026-02-30", counts: { inFavour: 1, against: 0, abstain: 0 } }, "meetingDate", /date/],
-      [{ meetingDate: "2000-01-01", counts: { inFavour: 1, against: 0, abstain: 0 } }, "meetingDate", /circulated on/],
-      [{ meetingDate: today, counts: { inFavour: 3, against: 1, abstain: 0 } }, "_form", /more than the committee's 3 voting members/],
-      [{ meetingDate: today, counts: { inFavour: -1, against: 0, abstain: 0 } }, "inFavour", /negative/],
-      [{ meetingDate: today, counts: { inFavour: 1.5, against: 0, abstain: 0 } }, "inFavour", /whole number/],
-      [{ meetingDate: today }, "_form", /counts, or each member/],
-      [{ meetingDate: today, counts: { inFavour: 1, against: 0, abstain: 0 }, perMember: [] }, "_form", /not both/],
+      [{ meetingDate: "2099-01-01", minutesRef: MINUTES, counts: { inFavour: 1, against: 0, abstain: 0 } }, "meetingDate", /future/],
+      [{ meetingDate: "2026-02-30", minutesRef: MINUTES, counts: { inFavour: 1, against: 0, abstain: 0 } }, "meetingDate", /date/],
+      [{ meetingDate: "2000-01-01", minutesRef: MINUTES, counts: { inFavour: 1, against: 0, abstain: 0 } }, "meetingDate", /circulated on/],
+      [{ meetingDate: today, minutesRef: MINUTES, counts: { inFavour: 3, against: 1, abstain: 0 } }, "_form", /more than the committee's 3 voting members/],
+      [{ meetingDate: today, minutesRef: MINUTES, counts: { inFavour: -1, against: 0, abstain: 0 } }, "inFavour", /negative/],
+      [{ meetingDate: today, minutesRef: MINUTES, counts: { inFavour: 1.5, against: 0, abstain: 0 } }, "inFavour", /whole number/],
+      [{ meetingDate: today, minutesRef: MINUTES }, "_form", /counts, or each member/],
+      [{ meetingDate: today, minutesRef: MINUTES, counts: { inFavour: 1, against: 0, abstain: 0 }, perMember: [] }, "_form", /not both/],
     ];
     for (const [input, field, says] of cases) {
       const before = await snapshot(ids.commissionId);
@@ -182,19 +182,22 @@ describe("a vote taken at a meeting", () => {
     const chair = await as("chair");
     const ids3 = await memberIds();
     const priya = (await as("adviser")).id;
-    const err = await recordMeetingVote(chair, rev.id, { meetingDate: today, perMember: [{ userId: priya, choice: "in-favour" }] }).catch((e) => e);
+    const err = await recordMeetingVote(chair, rev.id, { meetingDate: today, minutesRef: MINUTES, perMember: [{ userId: priya, choice: "in-favour" }] }).catch((e) => e);
     expect(err.fields.perMember).toMatch(/voting members/);
-    const dup = await recordMeetingVote(chair, rev.id, { meetingDate: today, perMember: [{ userId: ids3[0], choice: "in-favour" }, { userId: ids3[0], choice: "against" }] }).catch((e) => e);
+    const dup = await recordMeetingVote(chair, rev.id, { meetingDate: today, minutesRef: MINUTES, perMember: [{ userId: ids3[0], choice: "in-favour" }, { userId: ids3[0], choice: "against" }] }).catch((e) => e);
     expect(dup.fields.perMember).toMatch(/twice/);
-    const res = await recordMeetingVote(chair, rev.id, { meetingDate: today, perMember: [{ userId: ids3[0], choice: "in-favour" }, { userId: ids3[1], choice: "against" }] });
+    const res = await recordMeetingVote(chair, rev.id, { meetingDate: today, minutesRef: MINUTES, perMember: [{ userId: ids3[0], choice: "in-favour" }, { userId: ids3[1], choice: "against" }] });
     expect(res.result).toMatchObject({ inFavour: 1, against: 1, abstain: 0, outcome: "failed" });
     const s = await getBallotState(await as("member"), rev.id);
     expect(s.whoVotedHow.map((v) => v.choice)).toEqual(["in-favour", "against", null]);
   });
 
   it("is refused while an electronic ballot is open on the revision", async () => {
+    // One route to a result per revision (Placet's own rule): where a meeting's vote is recorded, no electronic ballot.
+    await expect(openBallot(await as("chair"), rev.id, { closesAt: inHours(3) })).rejects.toThrow(/taken at a meeting/);
+    rev = await circulateNext(ids.commissionId, "Foot widened again.");
     await openBallot(await as("chair"), rev.id, { closesAt: inHours(3) });
-    await expect(recordMeetingVote(await as("chair"), rev.id, { meetingDate: today, counts: { inFavour: 3, against: 0, abstain: 0 } })).rejects.toBeInstanceOf(ConflictError);
+    await expect(recordMeetingVote(await as("chair"), rev.id, { meetingDate: today, minutesRef: MINUTES, counts: { inFavour: 3, against: 0, abstain: 0 } })).rejects.toBeInstanceOf(ConflictError);
   });
 
   it("is the only way where the rules name no authority for voting online", async () => {
@@ -206,9 +209,9 @@ describe("a vote taken at a meeting", () => {
     const s = await getBallotState(owen, other.id);
     expect(s.electronicAllowed).toBe(false);
     expect(s.you).toMatchObject({ canOpen: false, canRecordMeeting: true });
-    const res = await recordMeetingVote(owen, other.id, { meetingDate: today, counts: { inFavour: 1, against: 0, abstain: 0 } });
+    const res = await recordMeetingVote(owen, other.id, { meetingDate: today, minutesRef: MINUTES, counts: { inFavour: 1, against: 0, abstain: 0 } });
     expect(res.result.outcome).toBe("carried");
-    await expect(recordMeetingVote(await as("chair"), other.id, { meetingDate: today, counts: { inFavour: 1, against: 0, abstain: 0 } })).rejects.toBeInstanceOf(NotFoundError);
+    await expect(recordMeetingVote(await as("chair"), other.id, { meetingDate: today, minutesRef: MINUTES, counts: { inFavour: 1, against: 0, abstain: 0 } })).rejects.toBeInstanceOf(NotFoundError);
   });
 });
 

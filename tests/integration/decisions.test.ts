@@ -5,7 +5,7 @@ import { castVote, closeBallot, openBallot, recordMeetingVote } from "@/lib/dal/
 import { getDecision, recordDecision } from "@/lib/dal/decisions";
 import { ConflictError, ForbiddenError, FreshSignInRequired, NotFoundError, ValidationError } from "@/lib/errors";
 import { closeDb, freshDemo, getDb, viewer } from "./db";
-import { PEOPLE, ROLES, circulateNext, events, inHours, signedIn, snapshot, type Who } from "./ballot-helpers";
+import { MINUTES, PEOPLE, ROLES, circulateNext, events, inHours, signedIn, snapshot, type Who } from "./ballot-helpers";
 
 let ids: Awaited<ReturnType<typeof freshDemo>>;
 beforeAll(async () => {
@@ -147,7 +147,7 @@ describe("recording the decision", () => {
   it("a carried meeting vote also supports approval", async () => {
     const chair = await as("chair");
     const m = await circulateNext(ids.commissionId, "Put to the meeting.");
-    await recordMeetingVote(chair, m.id, { meetingDate: today, counts: { inFavour: 2, against: 1, abstain: 0 } });
+    await recordMeetingVote(chair, m.id, { meetingDate: today, minutesRef: MINUTES, counts: { inFavour: 2, against: 1, abstain: 0 } });
     const d = await recordDecision(chair, m.id, { outcome: "approved" });
     expect(d.tally).toMatchObject({ kind: "meeting", meetingDate: today, inFavour: 2, against: 1 });
   });

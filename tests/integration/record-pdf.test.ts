@@ -11,7 +11,7 @@ import type { Viewer } from "@/lib/dal/viewer";
 import { renderDecisionRecordPdf } from "@/lib/record-pdf";
 import { verifyRecord } from "@/models/trail/node-hash";
 import { pdfPageTexts } from "../pdf-text";
-import { PEOPLE, signedIn } from "./ballot-helpers";
+import { MINUTES, PEOPLE, signedIn } from "./ballot-helpers";
 import { closeDb, freshDemo, viewer } from "./db";
 
 // The route reads the viewer from the request's session; here the test says who is asking.
@@ -29,7 +29,7 @@ beforeAll(async () => {
   const chair = await viewer(PEOPLE.chair);
   await signedIn(PEOPLE.chair, 1);
   const rev2 = (await listRevisions(chair, ids.commissionId)).find((r) => r.number === 2)!;
-  await recordMeetingVote(chair, rev2.id, { meetingDate: new Date().toISOString().slice(0, 10), counts: { inFavour: 3, against: 0, abstain: 0 } });
+  await recordMeetingVote(chair, rev2.id, { meetingDate: new Date().toISOString().slice(0, 10), minutesRef: MINUTES, counts: { inFavour: 3, against: 0, abstain: 0 } });
   await recordDecision(chair, rev2.id, {
     outcome: "approved-as-noted",
     conditions: "Lower the rim so that it stands ≤ 850 mm above the floor\nShow the fixing of the foot to the pedestal on the drawing",
@@ -71,6 +71,9 @@ describe("the decision record", () => {
     expect(all).toContain("theta = 120°");
     expect(all).toContain("Created the commission");
     expect(all).toContain("Margaret Ellery (chair)");
+    // The vote behind the decision: marked as taken from a meeting, with its minutes and its roll.
+    expect(all).toContain("recorded by the chair from a meeting; minutes: Minute book 3, page 41");
+    expect(all).toMatch(/Roll\s+David Osei, Ruth Penhallow, Colin Marsh \(3 voting members/);
   });
 
   it("leaves the studio's drafts out", async () => {

@@ -24,9 +24,11 @@ export default async function CommissionPage({ params }: { params: Promise<{ com
       <div className="grid gap-4 lg:col-span-2">
         <NextSteps commission={c} current={current} ballot={ballot} />
         <CurrentRevision commissionId={c.id} revision={current} ballot={ballot} draft={draft} />
-        <Card title="How this committee decides" action={c.rulesEditable ? <Link href={`/commissions/${c.id}/rules`} className="min-h-11 py-2">Edit the rules</Link> : undefined}>
+        <Card title="How this committee decides" action={c.rulesEditable ? <Link href={`/commissions/${c.id}/rules`} className="min-h-11 py-2">{c.rulesConfirmed ? "Change the rules" : "Confirm the rules"}</Link> : undefined}>
           <RulesSummary rules={c.rules} />
-          {!c.rulesEditable && c.you.can["rules.edit"] && <p className="mt-2 text-sm text-ink-soft">The rules are fixed now that a ballot has been held.</p>}
+          {!c.rulesConfirmed && <p className="mt-2 text-sm text-ink-soft" data-testid="rules-proposed">Proposed by the studio; the chair confirms or changes them before the first vote.</p>}
+          {c.openBallot && c.you.can["rules.edit"] && <p className="mt-2 text-sm text-ink-soft">The rules cannot change while the ballot on Revision {c.openBallot.number} is open.</p>}
+          {!c.you.can["rules.edit"] && <p className="mt-2 text-sm text-ink-soft">The rules are the committee&apos;s: only its chair changes them, and every change is in the trail.</p>}
         </Card>
       </div>
       <Card title="People" action={<Link href={`/commissions/${c.id}/people`} className="min-h-11 py-2">All people</Link>}>

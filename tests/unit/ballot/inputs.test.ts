@@ -29,14 +29,14 @@ describe("a vote", () => {
 
 describe("a meeting's vote", () => {
   it("accepts the counts, or each member's vote (counted here)", () => {
-    expect(parseMeetingVote({ meetingDate: "2026-11-30", counts: { inFavour: 3, against: 1, abstain: 0 } }, now)).toMatchObject({ ok: true, data: { counts: { inFavour: 3, against: 1, abstain: 0 }, perMember: null } });
-    const per = parseMeetingVote({ meetingDate: "2026-12-01", perMember: [{ userId: "a", choice: "in-favour" }, { userId: "b", choice: "abstain" }, { userId: "c", choice: "in-favour" }] }, now);
+    expect(parseMeetingVote({ meetingDate: "2026-11-30", minutesRef: "Minute book 3, page 41", counts: { inFavour: 3, against: 1, abstain: 0 } }, now)).toMatchObject({ ok: true, data: { counts: { inFavour: 3, against: 1, abstain: 0 }, perMember: null } });
+    const per = parseMeetingVote({ meetingDate: "2026-12-01", minutesRef: "Minute book 3, page 41", perMember: [{ userId: "a", choice: "in-favour" }, { userId: "b", choice: "abstain" }, { userId: "c", choice: "in-favour" }] }, now);
     expect(per).toMatchObject({ ok: true, data: { counts: { inFavour: 2, against: 0, abstain: 1 } } });
   });
   it("allows today in the earliest time zone but not a day later", () => {
     expect(latestPossibleToday(now)).toBe("2026-12-02");
-    expect(parseMeetingVote({ meetingDate: "2026-12-02", counts: { inFavour: 1, against: 0, abstain: 0 } }, now).ok).toBe(true);
-    expect(parseMeetingVote({ meetingDate: "2026-12-03", counts: { inFavour: 1, against: 0, abstain: 0 } }, now)).toMatchObject({ ok: false, errors: { meetingDate: expect.stringContaining("future") } });
+    expect(parseMeetingVote({ meetingDate: "2026-12-02", minutesRef: "Minute book 3, page 41", counts: { inFavour: 1, against: 0, abstain: 0 } }, now).ok).toBe(true);
+    expect(parseMeetingVote({ meetingDate: "2026-12-03", minutesRef: "Minute book 3, page 41", counts: { inFavour: 1, against: 0, abstain: 0 } }, now)).toMatchObject({ ok: false, errors: { meetingDate: expect.stringContaining("future") } });
   });
   it("knows real calendar dates", () => {
     expect(calendarDate("2028-02-29")).not.toBeNull();
@@ -47,5 +47,9 @@ describe("a meeting's vote", () => {
     expect(parseMeetingVote({ meetingDate: "2026-11-30", counts: { inFavour: "three", against: 0, abstain: 0 } }, now)).toMatchObject({ ok: false, errors: { inFavour: expect.stringContaining("whole number") } });
     expect(parseMeetingVote({ meetingDate: "2026-11-30", perMember: [{ userId: "a", choice: "yes" }] }, now)).toMatchObject({ ok: false, errors: { perMember: expect.stringContaining("in favour") } });
     expect(parseMeetingVote({ counts: { inFavour: 1, against: 0, abstain: 0 } }, now)).toMatchObject({ ok: false, errors: { meetingDate: expect.any(String) } });
+    // Where the minutes are is part of the record of a meeting's vote (common practice: a vote is evidenced by the minutes).
+    expect(parseMeetingVote({ meetingDate: "2026-11-30", counts: { inFavour: 1, against: 0, abstain: 0 } }, now)).toMatchObject({ ok: false, errors: { minutesRef: expect.stringContaining("minutes") } });
+    expect(parseMeetingVote({ meetingDate: "2026-11-30", minutesRef: "   ", counts: { inFavour: 1, against: 0, abstain: 0 } }, now)).toMatchObject({ ok: false, errors: { minutesRef: expect.any(String) } });
+    expect(parseMeetingVote({ meetingDate: "2026-11-30", minutesRef: "x".repeat(501), counts: { inFavour: 1, against: 0, abstain: 0 } }, now)).toMatchObject({ ok: false, errors: { minutesRef: expect.stringContaining("500") } });
   });
 });

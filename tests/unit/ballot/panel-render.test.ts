@@ -19,18 +19,18 @@ const voters = [
 function ballotState(over: Partial<BallotStateDto> = {}): BallotStateDto {
   return {
     revisionId: 7, revisionNumber: 2, revisionState: "circulated",
-    ballot: { id: 3, kind: "electronic", status: "open", motion: "That Revision 2 be approved.", openedAt: "2026-12-01T10:00:00.000Z", openedByName: "Margaret Ellery", closesAt: "2026-12-08T18:00:00.000Z", closedAt: null, meetingDate: null },
+    ballot: { id: 3, kind: "electronic", status: "open", motion: "That Revision 2 be approved.", openedAt: "2026-12-01T10:00:00.000Z", openedByName: "Margaret Ellery", closesAt: "2026-12-08T18:00:00.000Z", closedAt: null, meetingDate: null, minutesRef: null },
     tally: { inFavour: 1, against: 1, abstain: 0, ballotsCast: 2, votingMembers: 3, quorumRequired: 2 },
     whoVotedHow: voters.map((v, i) => ({ ...v, choice: (["in-favour", "against", null] as const)[i], at: null })),
     yourVote: "in-favour", youMayVote: true, result: null, rules, rulesText: ["A vote counts only if more than half take part.", "Members may vote here."],
-    electronicAllowed: true, votingMembers: voters, you: { isChair: false, canOpen: false, canClose: false, canRecordMeeting: false }, earlier: [],
+    electronicAllowed: true, votingMembers: voters, roll: voters, rulesConfirmed: true, meetingRefusal: null, openRefusal: null, you: { isChair: false, canOpen: false, canClose: false, canRecordMeeting: false }, earlier: [],
     serverTime: "2026-12-02T10:00:00.000Z", ...over,
   };
 }
 
 const decisionState = (over: Partial<DecisionStateDto> = {}): DecisionStateDto => ({
   revisionId: 7, number: 2, revisionState: "circulated", contentHash: "ab".repeat(32), decision: null,
-  basis: { ballotId: 3, kind: "electronic", meetingDate: null, inFavour: 3, against: 0, abstain: 0, votingMembers: 3, outcome: "carried", outcomeLabel: "Carried" },
+  basis: { ballotId: 3, kind: "electronic", meetingDate: null, inFavour: 3, against: 0, abstain: 0, votingMembers: 3, outcome: "carried", outcomeLabel: "Carried", minutesRef: null, roll: voters },
   refusals: { approved: null, "approved-as-noted": null, "revise-and-resubmit": null, "not-approved": "The ballot is still open." },
   you: { mayRecord: true, freshSignInNeeded: false, signedInAt: "2026-12-02T09:58:00.000Z" }, ...over,
 });

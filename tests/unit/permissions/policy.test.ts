@@ -22,7 +22,7 @@ const expected: Record<Action, [boolean, boolean, boolean, boolean, boolean, boo
   "people.view":             [Y, Y, Y, Y, Y, Y, N],
   "people.inviteCommittee":  [Y, Y, N, N, N, N, N],
   "people.inviteAdviser":    [Y, Y, Y, N, N, N, N],
-  "rules.edit":              [Y, Y, Y, N, N, N, N],
+  "rules.edit":              [N, N, Y, N, N, N, N],
   "revision.viewDraft":      [Y, Y, N, N, N, N, N],
   "revision.viewCirculated": [Y, Y, Y, Y, Y, Y, N],
   "revision.draft":          [Y, Y, N, N, N, N, N],

@@ -32,7 +32,11 @@ export function recordFixture(entries = 60): DecisionRecordDto {
       ],
       statement: "The committee thanks the studio for a careful revision.\nWe approve it on the conditions above, and ask to see the final drawing at the January meeting.",
       contentHash: hex(102), recordedByName: "Margaret Ellery", recordedAt: "2026-11-20T19:30:00.000Z",
-      tally: { ballotId: 3, kind: "meeting", meetingDate: "2026-11-20", inFavour: 4, against: 1, abstain: 0, votingMembers: 5, outcome: "carried", outcomeLabel: "Carried" },
+      tally: { ballotId: 3, kind: "meeting", meetingDate: "2026-11-20", inFavour: 4, against: 1, abstain: 0, votingMembers: 5, outcome: "carried", outcomeLabel: "Carried",
+        minutesRef: "Minute book 3, page 41", roll: [
+          { name: "Margaret Ellery", role: "chair" }, { name: "David Osei", role: "member" }, { name: "Ruth Penhallow", role: "member" },
+          { name: "Colin Marsh", role: "member" }, { name: "Anna Pell", role: "member" },
+        ] },
     }],
     trail,
     finalHash: trail.length ? trail[trail.length - 1].hash : "0".repeat(64),

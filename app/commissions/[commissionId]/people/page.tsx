@@ -33,6 +33,12 @@ export default async function PeoplePage({ params }: { params: Promise<{ commiss
       </div>
       {c.you.invitable.length > 0 && (
         <Card title="Invite someone">
+          {c.openBallot && (
+            <p className="mb-3 rounded-md border border-line bg-paper-deep p-3 text-sm" data-testid="roll-fixed-note">
+              A ballot on Revision {c.openBallot.number} is open. Who may vote is fixed until it closes: inviting a member or chair,
+              or changing anyone&apos;s role to or from member or chair, is refused until then (not queued). Advisers may still be invited.
+            </p>
+          )}
           <InviteForm commissionId={c.id} roles={c.you.invitable} />
         </Card>
       )}

@@ -2,7 +2,7 @@
 import { revalidatePath } from "next/cache";
 import { redirect } from "next/navigation";
 import { requireViewer } from "@/lib/session";
-import { updateRules } from "@/lib/dal/commissions";
+import { confirmRules, updateRules } from "@/lib/dal/rules";
 import { formErrors } from "@/lib/action-errors";
 
 export interface RulesState { errors?: Record<string, string> }
@@ -20,6 +20,17 @@ export async function rulesAction(commissionId: number, _prev: RulesState, form:
     await updateRules(await requireViewer(), commissionId, input);
   } catch (err) {
     return { errors: formErrors(err, "The rules could not be saved. Nothing was changed.") };
+  }
+  revalidatePath(`/commissions/${commissionId}`, "layout");
+  redirect(`/commissions/${commissionId}`);
+}
+
+/** The chair confirms the rules the studio proposed, as they stand. */
+export async function confirmRulesAction(commissionId: number, _prev: RulesState, _form: FormData): Promise<RulesState> {
+  try {
+    await confirmRules(await requireViewer(), commissionId);
+  } catch (err) {
+    return { errors: formErrors(err, "The rules could not be confirmed. Nothing was changed.") };
   }
   revalidatePath(`/commissions/${commissionId}`, "layout");
   redirect(`/commissions/${commissionId}`);

@@ -12,7 +12,9 @@ export default async function RulesPage({ params }: { params: Promise<{ commissi
   if (!c.you.can["rules.edit"]) notFound();
   return (
     <Card title="The committee's rules for deciding" className="max-w-2xl">
-      {c.rulesEditable ? <RulesForm commissionId={c.id} rules={c.rules} /> : <p>The rules are fixed now that a ballot has been held.</p>}
+      {c.rulesEditable
+        ? <RulesForm commissionId={c.id} rules={c.rules} confirmed={c.rulesConfirmed} />
+        : <p>The rules cannot change while the ballot on Revision {c.openBallot?.number} is open; change them once it has closed.</p>}
     </Card>
   );
 }

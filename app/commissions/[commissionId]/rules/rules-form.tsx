@@ -1,14 +1,28 @@
 "use client";
 import { useActionState, useState } from "react";
-import { rulesAction, type RulesState } from "./actions";
+import { confirmRulesAction, rulesAction, type RulesState } from "./actions";
 import { TextField, SelectField, TextArea, FormError } from "@/components/ui/field";
 import { Button } from "@/components/ui/button";
 import type { BallotRules } from "@/models/ballot";
 
-export function RulesForm({ commissionId, rules }: { commissionId: number; rules: BallotRules }) {
+/** The chair confirms the rules the studio proposed, as they stand. */
+function ConfirmRules({ commissionId }: { commissionId: number }) {
+  const [state, action, pending] = useActionState<RulesState, FormData>(confirmRulesAction.bind(null, commissionId), {});
+  return (
+    <form action={action} className="mb-6 rounded-md border border-line bg-paper-deep p-3" data-testid="confirm-rules">
+      <p className="mb-2">The studio proposed these rules when it set up the commission. They take effect when you, as chair, confirm them (or change them below).</p>
+      <FormError message={state.errors?._form} />
+      <Button type="submit" disabled={pending}>{pending ? "Confirming…" : "Confirm the rules as they stand"}</Button>
+    </form>
+  );
+}
+
+export function RulesForm({ commissionId, rules, confirmed }: { commissionId: number; rules: BallotRules; confirmed: boolean }) {
   const [state, action, pending] = useActionState<RulesState, FormData>(rulesAction.bind(null, commissionId), {});
   const [mode, setMode] = useState(rules.quorum === "majority" ? "majority" : "count");
   return (
+    <>
+    {!confirmed && <ConfirmRules commissionId={commissionId} />}
     <form action={action} noValidate>
       <FormError message={state.errors?._form} />
       <fieldset className="mb-4">
@@ -29,7 +43,8 @@ export function RulesForm({ commissionId, rules }: { commissionId: number; rules
       <TextArea label="Authority for electronic ballots" name="electronicAuthority" rows={2} defaultValue={rules.electronicAuthority ?? ""} error={state.errors?.electronicAuthority}
         hint="The bylaw clause or resolution that lets this committee vote electronically. Leave empty if votes are taken at meetings; the chair then records them here." />
       <Button type="submit" disabled={pending}>{pending ? "Saving…" : "Save the rules"}</Button>
-      <p className="mt-3 text-sm text-ink-soft">Changing the rules is recorded in the decision trail. Once a ballot has been held, they are fixed.</p>
+      <p className="mt-3 text-sm text-ink-soft">Only the chair changes the rules, never while a ballot is open; each change is recorded in the decision trail with the rules before and after.</p>
     </form>
+    </>
   );
 }
