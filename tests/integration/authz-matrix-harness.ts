@@ -9,6 +9,7 @@ import { eq, sql } from "drizzle-orm";
 import { NextRequest } from "next/server";
 import { getDb } from "@/db/client";
 import { sessions, users } from "@/db/schema";
+import { createSession, sessionCookie, sessionIdFor, sessionLimits } from "@/lib/session-store";
 import { env } from "@/lib/env";
 
 export const ROOT = path.resolve(import.meta.dirname, "../..");
@@ -60,7 +61,8 @@ export const importApp = (file: string): Promise<Record<string, unknown>> => imp
 
 // ---- sessions: a real row in `sessions`, its token in the request's cookie jar ----
 
-export const SESSION_COOKIE = "authjs.session-token";
+/** The session cookie's name for the app URL the tests run under (http: no __Host- prefix). */
+export const SESSION_COOKIE = sessionCookie().name;
 
 /** The cookie jar that next/headers hands out in the test (the test file mocks next/headers with it). */
 export interface Jar { cookies: Map<string, string> }
@@ -68,17 +70,18 @@ export function cookieHeader(jar: Jar): string {
   return [...jar.cookies].map(([k, v]) => `${k}=${v}`).join("; ");
 }
 
-/** Signs the person in as an e-mail link would leave them: a fresh database session; returns its token. */
-export async function startSession(email: string, expires?: Date): Promise<string> {
+/**
+ * Signs the person in as an e-mail link would leave them: a fresh database session through the session
+ * store Auth.js's adapter uses; returns the cookie's value. `expired` makes one that ended a minute ago.
+ */
+export async function startSession(email: string, expired = false): Promise<string> {
   const [u] = await getDb().select().from(users).where(eq(users.email, email));
   if (!u) throw new Error(`no user ${email}`);
-  const token = crypto.randomUUID();
-  // Thirty days ahead, as Auth.js sets it, so looking the session up does not extend (rewrite) it.
-  await getDb().insert(sessions).values({ sessionToken: token, userId: u.id, expires: expires ?? new Date(Date.now() + 30 * 24 * 3600_000), createdAt: new Date() });
-  return token;
+  const started = expired ? new Date(Date.now() - (sessionLimits().absoluteSeconds + 60) * 1000) : new Date();
+  return createSession(u.id, "authorization matrix", started);
 }
 export async function endSession(token: string) {
-  await getDb().delete(sessions).where(eq(sessions.sessionToken, token));
+  await getDb().delete(sessions).where(eq(sessions.sessionToken, sessionIdFor(token)));
 }
 
 // ---- calling ----
