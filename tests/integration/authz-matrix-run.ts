@@ -43,10 +43,14 @@ async function attempt(row: Row, o: Obj, jar: Jar): Promise<{ outcome: Outcome; 
   const [file, method] = row.key.split(" ");
   const { url, params } = urlFor(row, o);
   const res = await callRoute(file, { method, url, params, body: row.body?.(o), form: row.form ? await row.form(o) : undefined }, jar);
+  await Promise.all(afterTasks.splice(0));
   const outcome = routeOutcome(res);
   const text = await res.text().catch(() => "");
   return outcome === "ok" ? { outcome, body: text } : { outcome, message: text.slice(0, 160) };
 }
+
+/** Work routes handed to next/server's after() (the test mocks it to run at once); awaited per attempt. */
+export const afterTasks: Promise<unknown>[] = [];
 
 export async function runMatrix(jar: Jar): Promise<MatrixResult> {
   const sides: Sides = await buildWorld();

@@ -27,6 +27,7 @@ const CHAIR =    "401       404      403     403    403       ok    403      403
 const VOTERS =   "401       404      403     ok     ok        403   403      403"; // the demo's rules: the chair does not vote
 const PEOPLE =   "401       404      ok      ok     ok        ok    ok       ok"; // anyone on the commission
 const REDIRECT = "redirect  redirect redirect redirect redirect redirect redirect redirect";
+const NOT_SERVED = "404 404 404 404 404 404 404 404";
 
 export interface Row {
   /** `app/…/route.ts METHOD` or `app/…/actions.ts#exportName`. */
@@ -62,7 +63,7 @@ const today = () => new Date().toISOString().slice(0, 10);
 const png = () => sharp({ create: { width: 64, height: 48, channels: 3, background: { r: 9, g: 90, b: (seq += 1) % 255 } } }).png().toBuffer();
 export const uploadForm = async () => { const f = new FormData(); f.set("file", new Blob([new Uint8Array(await png())], { type: "image/png" }), "upload.png"); f.set("caption", "A new view"); return f; };
 
-const meetingVote = () => ({ meetingDate: today(), counts: { inFavour: 2, against: 0, abstain: 0 } });
+const meetingVote = () => ({ meetingDate: today(), minutesRef: "Minute book 3, page 41", counts: { inFavour: 2, against: 0, abstain: 0 } });
 const decision = () => ({ outcome: "revise-and-resubmit", conditions: "", statement: "Please show the fixing of the foot." });
 
 export const TABLE: Row[] = [
@@ -91,11 +92,13 @@ export const TABLE: Row[] = [
       return email === c.email ? null : `answers the session of ${email} to ${c.email}`;
     },
   }),
-  // ... and a sign-in request without Auth.js's CSRF token is turned away with nothing written (no link).
-  r("api/auth/[...nextauth]", "POST", "none", REDIRECT, {
+  // ... and its sign-in and other endpoints are not served at all: one way in, Placet's own form.
+  ...["POST", "PUT", "PATCH", "DELETE"].map((m) => r("api/auth/[...nextauth]", m, "none", NOT_SERVED, {
     url: "/api/auth/signin/nodemailer", params: { nextauth: ["signin", "nodemailer"] }, unchangedAlways: true,
     form: () => form({ email: "margaret@stwenna.test" }),
-  }),
+  })),
+  // Placet's sign-in form: the same answer for everyone (a link is queued only for an invited address).
+  r("sign-in/request", "POST", "none", REDIRECT, { form: () => form({ email: `nobody-${uniq()}@example.test` }) }),
   r("api/comments/[commentId]/reopen", "POST", "resolvedComment", STUDIO),
   r("api/comments/[commentId]/replies", "POST", "comment", PEOPLE, { body: () => ({ body: "Agreed." }) }),
   r("api/comments/[commentId]/resolve", "POST", "comment", STUDIO),
@@ -149,24 +152,21 @@ export const TABLE: Row[] = [
   // Inviting a member again as an adviser would take away their vote: the chair may invite advisers, not demote.
   a("commissions/[commissionId]/people/actions.ts", "inviteAction", "freshCommission", "401 404 403 403 403 403 ok ok",
     (fn, o) => fn(o.commissionId, {}, form({ email: "david@stwenna.test", name: "David Osei", role: "adviser" }))),
-  a("commissions/[commissionId]/revisions/[number]/ballot-actions.ts", "openBallotAction", "freshCirculated", CHAIR, (fn, o) => fn(o.revisionId, { closesAt: inHours(48) })),
-  a("commissions/[commissionId]/revisions/[number]/ballot-actions.ts", "castVoteAction", "openBallot", VOTERS, (fn, o) => fn(o.ballotId, "against")),
-  a("commissions/[commissionId]/revisions/[number]/ballot-actions.ts", "closeBallotAction", "freshOpenBallot", CHAIR, (fn, o) => fn(o.ballotId)),
-  a("commissions/[commissionId]/revisions/[number]/ballot-actions.ts", "recordMeetingVoteAction", "freshCirculated", CHAIR, (fn, o) => fn(o.revisionId, meetingVote())),
-  a("commissions/[commissionId]/revisions/[number]/ballot-actions.ts", "recordDecisionAction", "freshCirculated", CHAIR, (fn, o) => fn(o.revisionId, decision())),
-  a("commissions/[commissionId]/revisions/[number]/ballot-actions.ts", "sendDecisionSignInLinkAction", "current", CHAIR, (fn, o) => fn(o.revisionId)),
   a("commissions/[commissionId]/revisions/[number]/edit/actions.ts", "saveDraftAction", "draft", DRAFT,
     (fn, o) => fn(o.commissionId, o.number, { ...defaultFontParameters, engravingCount: 4 }, "Four engravings")),
   a("commissions/[commissionId]/revisions/[number]/edit/actions.ts", "circulateAction", "draft", DRAFT,
     (fn, o) => fn(o.commissionId, o.number, { ...defaultFontParameters }, "Ready for the committee")),
   a("commissions/[commissionId]/revisions/actions.ts", "createDraftAction", "noDraft", "401 404 403 403 403 403 redirect redirect",
     (fn, o) => fn(o.commissionId, {}, form({ note: "Next round" }))),
-  a("commissions/[commissionId]/rules/actions.ts", "rulesAction", "freshCommission", "401 404 403 403 403 redirect redirect redirect",
+  // The rules are the committee's: the chair alone changes or confirms them.
+  a("commissions/[commissionId]/rules/actions.ts", "confirmRulesAction", "freshCommission", "401 404 403 403 403 redirect 403 403",
+    (fn, o) => fn(o.commissionId, {}, form({}))),
+  a("commissions/[commissionId]/rules/actions.ts", "rulesAction", "freshCommission", "401 404 403 403 403 redirect 403 403",
     (fn, o) => fn(o.commissionId, {}, form({ quorumMode: "majority", threshold: "two-thirds", electronicAuthority: "Standing order 4" }))),
   a("commissions/new/actions.ts", "createCommissionAction", "none", "401 403 403 403 403 403 redirect redirect",
     (fn) => fn({}, form({ title: "Ambo for the nave", clientBody: "The same committee", site: "The nave" }))),
-  a("sign-in/actions.ts", "requestSignInLink", "none", REDIRECT, (fn) => fn({}, form({ email: `nobody-${uniq()}@example.test` }))),
   a("sign-in/actions.ts", "signOutAction", "none", REDIRECT, (fn) => fn()),
+  a("account/devices/actions.ts", "signOutOthersAction", "none", REDIRECT, (fn) => fn()), // signed out: to sign in
   a("studio/actions.ts", "saveStudioSettings", "none", "401 403 403 403 403 403 403 ok", (fn) => fn(demoStudioSettings)),
 ];
 

@@ -22,7 +22,7 @@ import { freshDemo, getDb, viewer } from "./db";
 /** The eight people the matrix signs in as (null: nobody signed in). Roles are on the demo's commission. */
 export const ROLES = {
   anonymous: null,
-  outsider: "owen@lanternhill.test", // chair of the demo's other commission, nothing on this one
+  outsider: "owen@thrennick.test", // chair of the demo's other commission, nothing on this one
   adviser: "priya@stwenna.test",
   member: "david@stwenna.test",
   treasurer: "colin@stwenna.test",
