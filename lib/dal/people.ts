@@ -54,6 +54,13 @@ export async function invitePerson(viewer: Viewer, commissionId: number, input: 
     if (existing?.role === role && existing.treasurer === treasurer) return { userId: user.id, created: false, roleChanged: false };
     if (existing && !can(locked.actor, "people.inviteCommittee")) throw new ForbiddenError("Only the studio may change a person's role.");
     await refuseDuringBallot(tx, commissionId, existing?.role ?? null, role);
+    if (role === "chair") {
+      const [chair] = await tx.select({ userId: commissionMembers.userId }).from(commissionMembers)
+        .where(and(eq(commissionMembers.commissionId, commissionId), eq(commissionMembers.role, "chair"))).limit(1);
+      if (chair && chair.userId !== user.id) {
+        throw new ValidationError({ role: "This commission already has a chair. A committee has one chair; a change of chair is the committee's to make, and is not done by invitation." });
+      }
+    }
     if (existing) {
       await tx.update(commissionMembers).set({ role, treasurer }).where(eq(commissionMembers.id, existing.id));
       await appendTrail(tx, {

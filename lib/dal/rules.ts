@@ -1,22 +1,25 @@
 import "server-only";
 import { and, eq, inArray } from "drizzle-orm";
 import { getDb } from "@/db/client";
-import { commissionMembers, commissions } from "@/db/schema";
+import { ballots, commissionMembers, commissions, revisions } from "@/db/schema";
 import { ballotRulesSchema, type BallotRules } from "@/models/ballot";
 import { fieldErrors } from "@/models/schemas/people";
 import { ConflictError, ForbiddenError, ValidationError } from "../errors";
 import { appendTrail, type Tx } from "../trail";
 import { can } from "@/models/permissions/policy";
 import { loadAccess } from "./access";
-import { closeDueBallots, openBallotOnCommission } from "./ballot-core";
+import { closeDueBallots } from "./ballot-core";
 import { rulesOf } from "./commissions";
 import { lockedFor } from "./locked";
 import type { Viewer } from "./viewer";
 
 const CHAIR_ONLY = "The committee's rules are the committee's: only its chair may change or confirm them.";
 
+/** A ballot counts as open until it is closed, even past its closing time, so the rules it closes under never move. */
 async function refuseWhileOpen(tx: Tx, commissionId: number) {
-  const open = await openBallotOnCommission(tx, commissionId);
+  const [open] = await tx.select({ number: revisions.number }).from(ballots)
+    .innerJoin(revisions, eq(revisions.id, ballots.revisionId))
+    .where(and(eq(ballots.commissionId, commissionId), eq(ballots.status, "open"))).limit(1);
   if (open) throw new ConflictError(`A ballot on Revision ${open.number} is open; the rules cannot change until it closes. Nothing was changed.`);
 }
 

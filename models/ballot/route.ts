@@ -17,6 +17,12 @@ export function meetingVoteRefusal(number: number, ballots: readonly BallotOnRev
   if (ballots.some((b) => b.kind === "electronic" && b.status === "open")) {
     return `A ballot on Revision ${number} is open; close it before recording a meeting's vote.`;
   }
+  const met = [...ballots].reverse().find((b) => b.kind === "meeting" && withResult(b));
+  if (met) {
+    const label = BALLOT_OUTCOME_LABELS[met.result!.outcome].toLowerCase();
+    return `A vote taken at a meeting on Revision ${number} is already recorded (${label}); a second one cannot be recorded on it. ` +
+      "The way forward is a new revision from the studio.";
+  }
   const held = [...ballots].reverse().find((b) => b.kind === "electronic" && withResult(b));
   if (held) {
     const label = BALLOT_OUTCOME_LABELS[held.result!.outcome].toLowerCase();

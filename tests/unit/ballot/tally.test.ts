@@ -66,6 +66,9 @@ describe("one route to a result per revision (Placet's own rule)", () => {
     expect(meetingVoteRefusal(2, [{ ...failed, result: { outcome: "no-quorum" } }])).toMatch(/no quorum/);
     expect(meetingVoteRefusal(2, [{ kind: "electronic", status: "open", result: null }])).toMatch(/is open/);
   });
+  it("refuses a second meeting vote once one is recorded, whatever its outcome (one route to a result)", () => {
+    expect(meetingVoteRefusal(2, [{ kind: "meeting", status: "closed", result: { outcome: "failed" } }])).toMatch(/already recorded \(failed\).*new revision/);
+  });
   it("allows a meeting vote where no electronic ballot has a result (none held, or one withdrawn)", () => {
     expect(meetingVoteRefusal(2, [])).toBeNull();
     expect(meetingVoteRefusal(2, [{ kind: "electronic", status: "withdrawn", result: null }])).toBeNull();

@@ -26,6 +26,6 @@ describe("input schemas", () => {
   });
   it("only same-site paths may follow sign-in", () => {
     expect(safeNext("/commissions/1")).toBe("/commissions/1");
-    for (const bad of ["//evil.test", "https://evil.test", "\\\\evil", "", "javascript:alert(1)"]) expect(safeNext(bad)).toBe("/commissions");
+    for (const bad of ["//evil.test", "https://evil.test", "\\\\evil", "", "javascript:alert(1)", "/\t/evil.test", "/\n/evil.test"]) expect(safeNext(bad)).toBe("/commissions");
   });
 });
