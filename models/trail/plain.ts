@@ -53,6 +53,7 @@ export function describeEvent(e: Pick<TrailEvent, "action" | "payload" | "subjec
       return `Recorded the decision on Revision ${s(p.number)}: ${s(p.outcomeLabel) || s(p.outcome)}${n ? ` (${n} condition${n === 1 ? "" : "s"})` : ""}.`;
     }
     case "studio settings changed": return "Changed the studio's settings.";
+    case "released to fabrication": return `Released Revision ${s(p.number)} to fabrication (content hash ${s(p.contentHash).slice(0, 12)}…).`;
     default: return `${e.action[0].toUpperCase()}${e.action.slice(1)}.`;
   }
 }
