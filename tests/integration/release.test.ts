@@ -1,9 +1,11 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { eq, like, sql } from "drizzle-orm";
-import { commissions, conditionAnswers, decisions, deposits, outbox, permissionPlans, releases, revisions, trailEvents, users } from "@/db/schema";
+import { commissions, deposits, outbox, releases, revisions, trailEvents, users } from "@/db/schema";
 import { castVote, closeBallot, openBallot } from "@/lib/dal/ballots";
 import { recordDecision } from "@/lib/dal/decisions";
 import { getReleaseStatus, releaseToFabrication } from "@/lib/dal/release";
+import { answerCondition } from "@/lib/dal/condition-answers";
+import { setPermissionsNeeded } from "@/lib/dal/permissions";
 import { loadChain } from "@/lib/dal/trail";
 import { ConflictError, ForbiddenError, NotFoundError } from "@/lib/errors";
 import { verifyChain } from "@/models/trail/node-hash";
@@ -75,13 +77,14 @@ describe("release to fabrication", () => {
   it("once everything holds, the owner releases exactly once, freezing the approved revision", async () => {
     const db = getDb();
     const [owner] = await db.select().from(users).where(eq(users.email, PEOPLE.owner));
-    const [chair] = await db.select().from(users).where(eq(users.email, PEOPLE.chair));
-    const [d] = await db.select().from(decisions).where(eq(decisions.revisionId, approved.id));
     const now = new Date();
-    await db.insert(permissionPlans).values({ commissionId: ids.commissionId, noneRequired: true, reason: "Glass font on a movable base: the diocesan adviser confirmed no faculty is needed.", setBy: chair.id, setAt: now });
+    await setPermissionsNeeded(await as("chair"), ids.commissionId, { noneRequired: true, reason: "Glass font on a movable base: the diocesan adviser confirmed no faculty is needed." });
+    // The deposit is set by hand here until the studio's money screens exist.
     await db.insert(deposits).values({ commissionId: ids.commissionId, currency: "GBP", contractSum: 1_200_000, depositBasis: "amount", depositAmount: 300_000, balanceAmount: 900_000, setBy: owner.id, setAt: now, waivedReason: "Paid by the diocese's grant directly", waivedBy: owner.id, waivedAt: now });
     expect((await getReleaseStatus(await as("owner"), ids.commissionId)).missing).toEqual([words.conditionsAnswered]);
-    for (const i of [0, 1]) await db.insert(conditionAnswers).values({ decisionId: d.id, commissionId: ids.commissionId, conditionIndex: i, answer: `Met in the drawings (${i})`, answeredBy: owner.id, answeredAt: now });
+    await answerCondition(await as("designer"), ids.commissionId, 1, { answer: "Met in the drawings (0)" });
+    expect((await getReleaseStatus(await as("owner"), ids.commissionId)).missing).toEqual([words.conditionsAnswered]);
+    await answerCondition(await as("owner"), ids.commissionId, 2, { answer: "Met in the drawings (1)" });
     expect(await getReleaseStatus(await as("member"), ids.commissionId)).toEqual({ ready: true, missing: [], releasedAt: null });
 
     const owners = await Promise.allSettled([0, 1, 2].map(async () => releaseToFabrication(await as("owner"), ids.commissionId)));
@@ -111,7 +114,9 @@ describe("release to fabrication", () => {
     expect(mails[0].bodyText).toContain((await getDb().select().from(revisions).where(eq(revisions.id, approved.id)))[0].contentHash!);
   });
 
-  it("a second release is refused", async () => {
+  it("a second release is refused, and what it was released on can no longer change", async () => {
     await expect(releaseToFabrication(await as("owner"), ids.commissionId)).rejects.toBeInstanceOf(ConflictError);
+    await expect(answerCondition(await as("owner"), ids.commissionId, 1, { answer: "Changed later" })).rejects.toBeInstanceOf(ConflictError);
+    await expect(setPermissionsNeeded(await as("chair"), ids.commissionId, { name: "Faculty" })).rejects.toBeInstanceOf(ConflictError);
   });
 });
