@@ -11,13 +11,10 @@ import { assertNotReleased, trail } from "./permissions";
 import { latestDecision } from "./release-facts";
 import { mailCommission } from "./release-mail";
 import type { Viewer } from "./viewer";
+import type { ConditionsDto } from "@/models/release/dto";
 
-export interface ConditionsDto {
-  /** The approved-as-noted decision the conditions belong to, or null when there is none. */
-  decision: { id: number; number: number } | null;
-  conditions: { index: number; text: string; answer: string | null; answeredByName: string | null; answeredAt: string | null }[];
-  you: { mayAnswer: boolean };
-}
+export type { ConditionsDto };
+
 
 /** The conditions of the latest approval as noted, with the studio's answers, for everyone on the commission. */
 export async function getConditions(viewer: Viewer, commissionId: number): Promise<ConditionsDto> {

@@ -10,27 +10,13 @@ import { appendTrail, lockCommission, type Tx } from "../trail";
 import { authorize, loadAccess, type Access } from "./access";
 import { mailCommission } from "./release-mail";
 import type { Viewer } from "./viewer";
+import type { PermissionDto, PermissionsDto } from "@/models/release/dto";
+
+export type { PermissionDto, PermissionsDto };
 
 export type PermissionRow = typeof requiredPermissions.$inferSelect;
 
-export interface PermissionDto {
-  id: number;
-  name: string;
-  authority: string;
-  reference: string | null;
-  grantedOn: string | null;
-  conditions: string | null;
-  recorded: boolean;
-  recordedByName: string | null;
-  recordedAt: string | null;
-  document: { name: string; sha256: string; url: string } | null;
-}
 
-export interface PermissionsDto {
-  plan: { noneRequired: boolean; reason: string } | null;
-  permissions: PermissionDto[];
-  you: { mayRecord: boolean };
-}
 
 const ONLY_CHAIR = "Only the chair keeps the list of permissions and records them.";
 

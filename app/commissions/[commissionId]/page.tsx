@@ -27,7 +27,7 @@ export default async function CommissionPage({ params }: { params: Promise<{ com
       <div className="grid gap-4 lg:col-span-2">
         <NextSteps commission={c} current={current} ballot={ballot} />
         <CurrentRevision commissionId={c.id} revision={current} ballot={ballot} draft={draft} />
-        <ReleaseCard commissionId={c.id} status={release} mayRelease={Boolean(c.you.can["release.release"])} />
+        <ReleaseCard commissionId={c.id} status={release} mayRelease={Boolean(c.you.can["release.release"])} linkToDetails />
         <Card title="How this committee decides" action={c.rulesEditable ? <Link href={`/commissions/${c.id}/rules`} className="min-h-11 py-2">Edit the rules</Link> : undefined}>
           <RulesSummary rules={c.rules} />
           {!c.rulesEditable && c.you.can["rules.edit"] && <p className="mt-2 text-sm text-ink-soft">The rules are fixed now that a ballot has been held.</p>}
