@@ -29,8 +29,10 @@ export interface FontProfile {
   bowl: PartProfile;
   foot: PartProfile;
   pedestal: PartProfile;
-  /** the water when the bowl is full to the brim */
+  /** the water at the working level (what the pictures show) */
   water: PartProfile;
+  /** the water when the bowl is full to the brim */
+  brimWater: PartProfile;
 }
 
 /** Largest angle between two sampled points of an arc, in degrees. */
@@ -40,7 +42,7 @@ export interface SamplingOptions {
   /** largest angle between sampled points of an arc, degrees */
   arcStepDeg?: number;
   /**
-   * largest gap between an arc and its chords, mm. Left out, it is min(wall thickness, depth) / 500,
+   * largest gap between an arc and its chords, mm. Left out, it is min(wall thickness, depth, water depth) / 500,
    * so shallow or thin bowls are sampled finely enough for the mesh to keep their volume.
    */
   arcSagittaMm?: number;
@@ -91,7 +93,8 @@ export function fontProfile(p: FontDimensions, options: SamplingOptions = {}): F
   const g = fontGeometry(p);
   const sampling: Sampling = {
     stepRad: ((options.arcStepDeg ?? DEFAULT_ARC_STEP_DEG) * Math.PI) / 180,
-    sagitta: options.arcSagittaMm ?? Math.min(p.wallThickness, p.depth) / 500,
+    // the water at its working level may be shallower than the bowl: sample finely enough for it too
+    sagitta: options.arcSagittaMm ?? Math.min(p.wallThickness, p.depth, p.depth - p.workingDepthBelowRim) / 500,
   };
   const a = p.rimRadius;
   const f = p.flatRadius;
@@ -116,15 +119,16 @@ export function fontProfile(p: FontDimensions, options: SamplingOptions = {}): F
     { kind: "line", from: [rp, 0], to: [rp, g.footBaseZ] },
     { kind: "line", from: [rp, g.footBaseZ], to: [0, g.footBaseZ] },
   ];
-  const water: ProfileSegment[] = [
-    { kind: "arc", from: [0, g.interiorBottomZ], to: [a, g.rimZ], centreZ: cz, radius: R },
-    { kind: "line", from: [a, g.rimZ], to: [0, g.rimZ] },
+  const waterTo = (r: number, z: number): ProfileSegment[] => [
+    { kind: "arc", from: [0, g.interiorBottomZ], to: [r, z], centreZ: cz, radius: R },
+    { kind: "line", from: [r, z], to: [0, z] },
   ];
   return {
     geometry: g,
     bowl: part("bowl", bowl, sampling),
     foot: part("foot", foot, sampling),
     pedestal: part("pedestal", pedestal, sampling),
-    water: part("water", water, sampling),
+    water: part("water", waterTo(g.waterLineRadius, g.waterLineZ), sampling),
+    brimWater: part("water", waterTo(a, g.rimZ), sampling),
   };
 }

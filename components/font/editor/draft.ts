@@ -56,8 +56,12 @@ export function parseTyped(s: string): number | string | undefined {
 export function candidateFromDraft(d: DraftState): Record<FontFieldName, unknown> {
   const out = {} as Record<FontFieldName, unknown>;
   for (const f of fontFields) {
-    if (f.kind === "glass") {
+    if (f.kind === "glass" || f.kind === "choice") {
       out[f.name] = d.text[f.name];
+      continue;
+    }
+    if (f.kind === "flag") {
+      out[f.name] = d.text[f.name] === "true";
       continue;
     }
     const exact = d.exactMm[f.name];
