@@ -1,4 +1,3 @@
-import type { ReactNode } from "react";
 import {
   formatAngle,
   formatArea,
@@ -15,6 +14,8 @@ import {
   type LengthUnit,
 } from "@/models/font";
 import { FontCautions } from "./FontCautions";
+import { Group, Row } from "./FigureRows";
+import { StabilityFigures } from "./StabilityFigures";
 
 export interface FontFiguresProps {
   figures: Figures;
@@ -24,25 +25,6 @@ export interface FontFiguresProps {
   /** dim the figures, e.g. while the entered values do not yet make a valid form */
   stale?: boolean;
   className?: string;
-}
-
-function Row({ label, value, basis }: { label: string; value: ReactNode; basis: string }) {
-  return (
-    <div className="grid grid-cols-[minmax(0,1fr)_auto] gap-x-4 border-b border-line py-2 last:border-b-0">
-      <dt className="text-ink">{label}</dt>
-      <dd className="text-right font-semibold tabular-nums text-ink">{value}</dd>
-      <dd className="col-span-2 text-xs text-ink-soft">{basis}</dd>
-    </div>
-  );
-}
-
-function Group({ title, children }: { title: string; children: ReactNode }) {
-  return (
-    <section className="rounded-lg border border-line bg-card p-4">
-      <h3 className="mb-1 font-serif text-lg font-semibold">{title}</h3>
-      <dl className="text-sm">{children}</dl>
-    </section>
-  );
 }
 
 /** The derived figures of a font, with units and how each was found. */
@@ -59,6 +41,7 @@ export function FontFigures({ figures: f, units, showCautions = true, stale = fa
       <div className="grid gap-4 md:grid-cols-2">
         <Group title="Bowl">
           <Row label="Capacity, full to the brim" value={formatCapacity(f.capacityLitres, units)} basis="Interior spherical cap" />
+          <Row label="Capacity at the working level" value={formatCapacity(f.workingCapacityLitres, units)} basis="Water standing at the level set below the rim" />
           <Row label="Across the outside of the rim" value={L(2 * f.outerRimRadiusMm)} basis="Where the outer sphere meets the rim" />
           <Row label="Rim height above the floor" value={L(f.rimHeightMm)} basis="Pedestal, foot and bowl stacked" />
           <Row label="Glass under the interior" value={L(f.glassUnderInteriorMm)} basis="Wall less the cap ground off for the flat" />
@@ -68,11 +51,15 @@ export function FontFigures({ figures: f, units, showCautions = true, stale = fa
           <Row label="Bowl glass" value={M(f.bowlMassKg)} basis={`${formatVolumeCm3(f.bowlGlassVolumeCm3, units)} of glass`} />
           <Row label="Foot glass" value={M(f.footMassKg)} basis={`${formatVolumeCm3(f.footGlassVolumeCm3, units)} of glass`} />
           <Row label="Water when full" value={M(f.waterMassKg)} basis="Water at 20 °C" />
-          <Row label="Filled weight" value={M(f.filledMassKg)} basis="Glass and water; the pedestal is not included" />
+          <Row label="Filled weight" value={M(f.filledMassKg)} basis="Glass and water to the brim; the pedestal is not included" />
+          <Row label="Pedestal" value={M(f.pedestalMassKg)} basis="Its material's density times its volume" />
+          <Row label="Whole font, at the working level" value={M(f.totalMassKg)} basis="Glass, pedestal and water at the working level" />
         </Group>
         <Group title="Standing">
-          <Row label="Centre of mass, full" value={L(f.centreOfMassHeightMm)} basis="Height above the floor, glass and water" />
-          <Row label="Tip-over angle" value={formatAngle(f.tipAngleDeg)} basis="Tilt at which the centre of mass passes the foot's edge" />
+          <Row label="Centre of mass of the glass" value={L(f.centreOfMassHeightMm)} basis="Height above the floor, glass and water at the working level" />
+          <Row label="Tip-over angle of the glass" value={formatAngle(f.tipAngleDeg)} basis="Tilt at which it passes the foot's edge; a slow lean (water moves)" />
+          <Row label="Centre of mass of the whole font" value={L(f.wholeFontCentreOfMassHeightMm)} basis="Pedestal included, water at the working level" />
+          <Row label="Tip-over angle of the whole font" value={formatAngle(f.wholeFontTipAngleDeg)} basis="Tilt at which it passes the pedestal's base edge; a slow lean" />
           <Row label="Pressure under the foot" value={formatPressure(f.bearingPressureKPa, units)} basis="Filled weight over the foot's base area" />
         </Group>
         <Group title="Engravings">
@@ -87,6 +74,7 @@ export function FontFigures({ figures: f, units, showCautions = true, stale = fa
           )}
         </Group>
       </div>
+      {f.rimLoadToTipKg && <StabilityFigures figures={f} />}
       <p className="text-xs text-ink-soft">
         Densities used: {glass?.label ?? "glass"}, {formatNumber(f.glassDensityKgM3, 0)} kg/m³ ({glass?.source ?? "nominal"}); {WATER_DENSITY_SOURCE}.
       </p>

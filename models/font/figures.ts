@@ -112,7 +112,10 @@ export function computeFontFigures(params: FontParameters, profile?: FontProfile
     wholeFontTipAngleDeg,
     rimLoadToTipKg,
     rimPushToTipKg,
-    fixing: fixingAdvice(rimLoadToTipKg, rimPushToTipKg),
+    fixing: fixingAdvice(rimLoadToTipKg, rimPushToTipKg, {
+      glassFixed: !tip.hasPedestal || params.glassFixedToPedestal,
+      pedestalFixed: params.pedestalFixedToFloor,
+    }),
     bowlGlassVolumeCm3: bowl.volume / MM3_PER_CM3,
     footGlassVolumeCm3: foot.volume / MM3_PER_CM3,
     bowlMassKg,

@@ -42,7 +42,7 @@ export interface SamplingOptions {
   /** largest angle between sampled points of an arc, degrees */
   arcStepDeg?: number;
   /**
-   * largest gap between an arc and its chords, mm. Left out, it is min(wall thickness, depth, water depth) / 500,
+   * largest gap between an arc and its chords, mm. Left out, it is min(wall thickness, depth) / 500,
    * so shallow or thin bowls are sampled finely enough for the mesh to keep their volume.
    */
   arcSagittaMm?: number;
@@ -93,8 +93,7 @@ export function fontProfile(p: FontDimensions, options: SamplingOptions = {}): F
   const g = fontGeometry(p);
   const sampling: Sampling = {
     stepRad: ((options.arcStepDeg ?? DEFAULT_ARC_STEP_DEG) * Math.PI) / 180,
-    // the water at its working level may be shallower than the bowl: sample finely enough for it too
-    sagitta: options.arcSagittaMm ?? Math.min(p.wallThickness, p.depth, p.depth - p.workingDepthBelowRim) / 500,
+    sagitta: options.arcSagittaMm ?? Math.min(p.wallThickness, p.depth) / 500,
   };
   const a = p.rimRadius;
   const f = p.flatRadius;
@@ -128,7 +127,11 @@ export function fontProfile(p: FontDimensions, options: SamplingOptions = {}): F
     bowl: part("bowl", bowl, sampling),
     foot: part("foot", foot, sampling),
     pedestal: part("pedestal", pedestal, sampling),
-    water: part("water", waterTo(g.waterLineRadius, g.waterLineZ), sampling),
+    // water at its working level may be shallower than the bowl: sampled finely enough for its own depth
+    water: part("water", waterTo(g.waterLineRadius, g.waterLineZ), {
+      ...sampling,
+      sagitta: Math.min(sampling.sagitta, options.arcSagittaMm ?? (p.depth - p.workingDepthBelowRim) / 500),
+    }),
     brimWater: part("water", waterTo(a, g.rimZ), sampling),
   };
 }

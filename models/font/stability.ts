@@ -83,12 +83,19 @@ const smallest = (...v: (number | null)[]) => {
 export interface FixingAdvice {
   glassMustBeFixed: boolean;
   pedestalMustBeFixed: boolean;
+  /** the joints the parameters say are fixed (no pedestal counts as the glass fixed) */
+  glassFixed: boolean;
+  pedestalFixed: boolean;
   /** plain sentences: what must be fixed and why, then the caution */
   lines: string[];
 }
 
 /** Which joints must be fixed, compared with the leaning design loads, in plain words. */
-export function fixingAdvice(loads: TipCase, pushes: TipCase): FixingAdvice {
+export function fixingAdvice(
+  loads: TipCase,
+  pushes: TipCase,
+  fixed: { glassFixed: boolean; pedestalFixed: boolean },
+): FixingAdvice {
   const d = LEANING_DESIGN_LOAD;
   const fails = (v: number | null, h: number | null) =>
     (v !== null && v < d.verticalKgf) || (h !== null && h < d.horizontalKgf);
@@ -107,5 +114,5 @@ export function fixingAdvice(loads: TipCase, pushes: TipCase): FixingAdvice {
     lines.push("Against the leaning loads below, nothing that is left loose would tip.");
   lines.push(FIXING_CAUTION);
   lines.push("The tipping angles with water assume a slow lean: water moves when the font is jolted.");
-  return { glassMustBeFixed, pedestalMustBeFixed, lines };
+  return { glassMustBeFixed, pedestalMustBeFixed, ...fixed, lines };
 }

@@ -51,7 +51,7 @@ describe("the 3D mesh encloses the volume the figures report", () => {
       }),
       { numRuns: 40 },
     );
-  });
+  }, 60_000); // 40 meshes: slow on a shared machine
 });
 
 describe("model ↔ scene coordinates", () => {
