@@ -9,6 +9,7 @@ export function CommissionTabs({ id }: { id: number }) {
     { href: base, label: "Overview", match: (p: string) => p === base },
     { href: `${base}/revisions`, label: "Revisions", match: (p: string) => p.startsWith(`${base}/revisions`) },
     { href: `${base}/people`, label: "People", match: (p: string) => p.startsWith(`${base}/people`) },
+    { href: `${base}/release`, label: "Release", match: (p: string) => p.startsWith(`${base}/release`) },
     { href: `${base}/trail`, label: "Trail", match: (p: string) => p.startsWith(`${base}/trail`) },
   ];
   return (

@@ -302,3 +302,4 @@ export const digestItems = mysqlTable("digest_items", {
   createdAt: now(),
   digestedAt: utc("digested_at"),
 }, (t) => [uniqueIndex("digest_items_dedupe").on(t.dedupeKey), index("digest_items_user").on(t.userId, t.digestedAt)]);
+export * from "./schema-release";

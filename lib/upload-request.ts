@@ -14,6 +14,8 @@ export interface UploadForm {
   name: string;
   bytes: Uint8Array;
   caption: string | null;
+  /** The form's other text fields, by name. */
+  fields: Record<string, string>;
 }
 
 /**
@@ -42,5 +44,7 @@ export async function readUploadForm(req: Request): Promise<UploadForm | Respons
   if (typeof file === "string") throw new ValidationError({ file: "Choose a file to upload: the form sent text instead of a file." });
   const caption = form.get("caption");
   if (caption !== null && typeof caption !== "string") throw new ValidationError({ caption: "The caption must be text." });
-  return { name: file.name, bytes: new Uint8Array(await file.arrayBuffer()), caption };
+  const fields: Record<string, string> = {};
+  for (const [k, v] of form.entries()) if (typeof v === "string" && k !== "file") fields[k] = v;
+  return { name: file.name, bytes: new Uint8Array(await file.arrayBuffer()), caption, fields };
 }

@@ -25,7 +25,7 @@ import {
   type LengthUnit,
 } from "@/models/font";
 
-export type Kind = "length" | "mass" | "capacity" | "pressure" | "area" | "volume" | "angle" | "count" | "density" | "glass" | "angles";
+export type Kind = "length" | "mass" | "capacity" | "pressure" | "area" | "volume" | "angle" | "count" | "density" | "glass" | "angles" | "choice" | "flag";
 
 export interface CompareRow {
   key: string;
@@ -38,9 +38,10 @@ export interface CompareRow {
   direction: "more" | "less" | null;
 }
 
-type Value = number | string | number[] | null | undefined;
+type Value = number | string | boolean | number[] | null | undefined;
+type Worded = "glass" | "angles" | "choice" | "flag";
 
-const unitOf: Record<Exclude<Kind, "glass" | "angles">, (u: LengthUnit) => { to: (v: number) => number; suffix: string }> = {
+const unitOf: Record<Exclude<Kind, Worded>, (u: LengthUnit) => { to: (v: number) => number; suffix: string }> = {
   length: (u) => (u === "in" ? { to: mmToIn, suffix: " in" } : { to: (v) => v, suffix: " mm" }),
   mass: (u) => (u === "in" ? { to: kgToLb, suffix: " lb" } : { to: (v) => v, suffix: " kg" }),
   capacity: (u) => (u === "in" ? { to: litresToUsGallons, suffix: " US gal" } : { to: (v) => v, suffix: " L" }),
@@ -56,6 +57,8 @@ const unitOf: Record<Exclude<Kind, "glass" | "angles">, (u: LengthUnit) => { to:
 export function formatValue(kind: Kind, v: Value, u: LengthUnit): string {
   if (v === null || v === undefined) return "—";
   if (kind === "glass") return glassMaterials[v as GlassKind]?.label ?? String(v);
+  if (kind === "flag") return v ? "Yes" : "No";
+  if (kind === "choice") return fontFields.flatMap((f) => f.options ?? []).find((o) => o.value === v)?.label ?? String(v);
   if (kind === "angles") return (v as number[]).length ? formatList((v as number[]).map(formatAngle)) : "None";
   if (typeof v !== "number") return String(v);
   switch (kind) {
@@ -72,7 +75,7 @@ export function formatValue(kind: Kind, v: Value, u: LengthUnit): string {
 }
 
 /** A signed change in the chosen units, e.g. "+12 mm" or "−1.8 kg" (a true minus sign). */
-export function formatChange(kind: Exclude<Kind, "glass" | "angles">, delta: number, u: LengthUnit): string {
+export function formatChange(kind: Exclude<Kind, Worded>, delta: number, u: LengthUnit): string {
   const { to, suffix } = unitOf[kind](u);
   const d = to(delta);
   const a = Math.abs(d);
@@ -89,7 +92,7 @@ function same(a: number, b: number): boolean {
 
 export function compareValue(key: string, label: string, kind: Kind, older: Value, newer: Value, u: LengthUnit): CompareRow {
   const row = { key, label, older: formatValue(kind, older, u), newer: formatValue(kind, newer, u) };
-  if (typeof older === "number" && typeof newer === "number" && kind !== "glass" && kind !== "angles") {
+  if (typeof older === "number" && typeof newer === "number" && kind !== "glass" && kind !== "angles" && kind !== "choice" && kind !== "flag") {
     if (same(older, newer)) return { ...row, change: null, direction: null };
     return { ...row, change: formatChange(kind, newer - older, u), direction: newer > older ? "more" : "less" };
   }
@@ -126,6 +129,10 @@ const figureSpecs: FigureSpec[] = [
   ["centreOfMassHeightMm", "Centre of mass, full, above the floor", "length", (f) => f.centreOfMassHeightMm],
   ["tipAngleDeg", "Tip-over angle", "angle", (f) => f.tipAngleDeg],
   ["bearingPressureKPa", "Pressure under the foot", "pressure", (f) => f.bearingPressureKPa],
+  ["workingCapacityLitres", "Capacity at the working level", "capacity", (f) => f.workingCapacityLitres],
+  ["pedestalMassKg", "Pedestal weight", "mass", (f) => f.pedestalMassKg],
+  ["rimLoadGlassEmpty", "Lean on the rim that tips the glass off, empty", "mass", (f) => f.rimLoadToTipKg?.glassOffPedestalEmpty],
+  ["rimLoadWholeEmpty", "Lean on the rim that tips the whole font, empty", "mass", (f) => f.rimLoadToTipKg?.wholeFontEmpty],
   ["engravingAngles", "Engraving angles from the datum", "angles", (f) => f.engravings.map((e) => e.angleDeg)],
   ["engravingArcSpacingMm", "Spacing between engraving centres", "length", (f) => f.engravingArcSpacingMm],
   ["engravingCircleRadiusMm", "Radius of the circle through the engravings", "length", (f) => f.engravingCircleRadiusMm],

@@ -15,6 +15,8 @@ import {
   type LengthUnit,
 } from "@/models/font";
 import { FontCautions } from "./FontCautions";
+import { Group, Row } from "./FigureRows";
+import { StabilityFigures } from "./StabilityFigures";
 
 export interface FontFiguresProps {
   figures: Figures;
@@ -24,25 +26,6 @@ export interface FontFiguresProps {
   /** dim the figures, e.g. while the entered values do not yet make a valid form */
   stale?: boolean;
   className?: string;
-}
-
-function Row({ label, value, basis }: { label: string; value: ReactNode; basis: string }) {
-  return (
-    <div className="grid grid-cols-[minmax(0,1fr)_auto] gap-x-4 border-b border-line py-2 last:border-b-0">
-      <dt className="text-ink">{label}</dt>
-      <dd className="text-right font-semibold text-ink tabular-nums">{value}</dd>
-      <dd className="col-span-2 text-xs text-ink-soft">{basis}</dd>
-    </div>
-  );
-}
-
-function Group({ title, children }: { title: string; children: ReactNode }) {
-  return (
-    <section className="rounded-lg border border-line bg-card p-4">
-      <h3 className="mb-1 font-serif text-lg font-semibold">{title}</h3>
-      <dl className="text-sm">{children}</dl>
-    </section>
-  );
 }
 
 type RowData = [label: string, value: ReactNode, basis: string];
@@ -75,6 +58,7 @@ function figureGroups(f: Figures, units: LengthUnit): { title: string; rows: Row
       title: "Bowl",
       rows: [
         ["Capacity, full to the brim", formatCapacity(f.capacityLitres, units), "Interior spherical cap"],
+        ["Capacity at the working level", formatCapacity(f.workingCapacityLitres, units), "Water standing at the level set below the rim"],
         ["Across the outside of the rim", L(2 * f.outerRimRadiusMm), "Where the outer sphere meets the rim"],
         ["Rim height above the floor", L(f.rimHeightMm), "Pedestal, foot and bowl stacked"],
         ["Glass under the interior", L(f.glassUnderInteriorMm), "Wall less the cap ground off for the flat"],
@@ -91,14 +75,18 @@ function figureGroups(f: Figures, units: LengthUnit): { title: string; rows: Row
         ["Bowl glass", M(f.bowlMassKg), glassOf(f.bowlGlassVolumeCm3)],
         ["Foot glass", M(f.footMassKg), glassOf(f.footGlassVolumeCm3)],
         ["Water when full", M(f.waterMassKg), "Water at 20 °C"],
-        ["Filled weight", M(f.filledMassKg), "Glass and water; the pedestal is not included"],
+        ["Filled weight", M(f.filledMassKg), "Glass and water to the brim; the pedestal is not included"],
+        ["Pedestal", M(f.pedestalMassKg), "Its material's density times its volume"],
+        ["Whole font, at the working level", M(f.totalMassKg), "Glass, pedestal and water at the working level"],
       ],
     },
     {
       title: "Standing",
       rows: [
-        ["Centre of mass, full", L(f.centreOfMassHeightMm), "Height above the floor, glass and water"],
-        ["Tip-over angle", formatAngle(f.tipAngleDeg), "Tilt at which the centre of mass passes the foot's edge"],
+        ["Centre of mass of the glass", L(f.centreOfMassHeightMm), "Height above the floor, glass and water at the working level"],
+        ["Tip-over angle of the glass", formatAngle(f.tipAngleDeg), "Tilt at which it passes the foot's edge; a slow lean (water moves)"],
+        ["Centre of mass of the whole font", L(f.wholeFontCentreOfMassHeightMm), "Pedestal included, water at the working level"],
+        ["Tip-over angle of the whole font", formatAngle(f.wholeFontTipAngleDeg), "Tilt at which it passes the pedestal's base edge; a slow lean"],
         [
           "Pressure under the foot",
           formatPressure(f.bearingPressureKPa, units),
@@ -130,6 +118,7 @@ export function FontFigures({
           </Group>
         ))}
       </div>
+      {f.rimLoadToTipKg && <StabilityFigures figures={f} />}
       <p className="text-xs text-ink-soft">
         Densities used: {glass?.label ?? "glass"}, {formatNumber(f.glassDensityKgM3, 0)} kg/m³ (
         {glass?.source ?? "nominal"}); {WATER_DENSITY_SOURCE}.

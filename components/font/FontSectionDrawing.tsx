@@ -38,15 +38,10 @@ export function FontSectionDrawing({ profile: prof, className = "" }: { profile:
       <path d={path(prof.foot.points)} fill="#b9d6cf" stroke="#5d7f78" strokeWidth={halfWidth / 300} />
       <path d={path(prof.bowl.points)} fill="#b9d6cf" stroke="#5d7f78" strokeWidth={halfWidth / 300} />
       <line
-        x1={0}
-        x2={0}
-        y1={0}
-        y2={-height}
-        stroke="currentColor"
-        strokeDasharray={`${halfWidth / 40} ${halfWidth / 60}`}
-        strokeWidth={halfWidth / 400}
-        opacity={0.4}
+        x1={-g.waterLineRadius} x2={g.waterLineRadius} y1={-g.waterLineZ} y2={-g.waterLineZ}
+        stroke="#2f5f8a" strokeWidth={halfWidth / 250} data-testid="section-water-line"
       />
+      <line x1={0} x2={0} y1={0} y2={-height} stroke="currentColor" strokeDasharray={`${halfWidth / 40} ${halfWidth / 60}`} strokeWidth={halfWidth / 400} opacity={0.4} />
     </svg>
   );
 }

@@ -73,7 +73,7 @@ export function RevisionView({ initial, commissionId }: { initial: RevisionDto; 
           <h3 id="fig-h" className="font-serif text-2xl font-semibold">Figures</h3>
           <UnitsToggle units={units} onChange={setUnits} />
         </div>
-        {rev.figures ? <FontFigures figures={rev.figures as Figures} units={units} /> : <p className="text-danger">The model's values do not make a valid font yet.</p>}
+        {rev.figures ? <FontFigures figures={model.figures} units={units} /> : <p className="text-danger">The model's values do not make a valid font yet.</p>}
       </section>
 
       <section aria-labelledby="model-h" className="grid gap-2">

@@ -5,7 +5,7 @@
 import { z } from "zod";
 import { computeFontFigures, type FontFigures } from "./figures";
 import { fontProfile, type FontProfile } from "./profile";
-import { fontParametersSchema } from "./schema";
+import { fontParameterDefaults, fontParametersSchema } from "./schema";
 import type { FontFieldErrors, FontParameters } from "./types";
 
 export type FontParseResult =
@@ -33,8 +33,17 @@ export interface FontModel {
  * parameters (e.g. those a server stored with a revision) are used as they are.
  */
 export function modelFont(params: FontParameters, figures?: FontFigures | null): FontModel {
-  const profile = fontProfile(params);
-  return { params, profile, figures: figures ?? computeFontFigures(params, profile) };
+  const full = withFontDefaults(params);
+  const profile = fontProfile(full);
+  // Figures stored before the stability figures existed keep their values; the missing ones are
+  // worked out from the same (defaulted) parameters.
+  const stored = figures && figures.rimLoadToTipKg === undefined ? { ...computeFontFigures(full, profile), ...figures } : figures;
+  return { params: full, profile, figures: stored ?? computeFontFigures(full, profile) };
+}
+
+/** Parameters saved before newer fields existed, with those fields at their stated defaults. */
+export function withFontDefaults(params: FontParameters): FontParameters {
+  return { ...fontParameterDefaults, ...params };
 }
 
 export type FontEvaluation =

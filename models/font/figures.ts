@@ -6,11 +6,29 @@ import { engravingLayout, type EngravingPosition } from "./engravings";
 import { integrateOutline } from "./integrate";
 import { glassMaterials, WATER_DENSITY_KG_M3, type GlassKind } from "./materials";
 import { fontProfile, type FontProfile } from "./profile";
+import { pedestalMassKg as pedestalMass, wholeFontTipRadiusMm } from "./pedestal";
+import { fixingAdvice, rimLoadsToTip, rimPushesToTip, type FixingAdvice, type TipCase } from "./stability";
 import { radToDeg, STANDARD_GRAVITY } from "./units";
 import type { FontParameters } from "./types";
 
 export interface FontFigures {
+  /** to the brim */
   capacityLitres: number;
+  /** to the working level (workingDepthBelowRim below the rim) */
+  workingCapacityLitres: number;
+  workingWaterMassKg: number;
+  pedestalMassKg: number;
+  /** glass, pedestal and water at the working level */
+  totalMassKg: number;
+  /** whole font (pedestal included), water at the working level: height above the floor */
+  wholeFontCentreOfMassHeightMm: number;
+  /** tilt at which the whole font's centre of mass passes the pedestal's base edge */
+  wholeFontTipAngleDeg: number;
+  /** vertical load on the outer rim edge that starts each tipping, kgf; null where fixed or it cannot tip */
+  rimLoadToTipKg: TipCase;
+  /** horizontal push at the rim that starts each tipping, kgf */
+  rimPushToTipKg: TipCase;
+  fixing: FixingAdvice;
   bowlGlassVolumeCm3: number;
   footGlassVolumeCm3: number;
   bowlMassKg: number;
@@ -50,25 +68,54 @@ export function computeFontFigures(params: FontParameters, profile?: FontProfile
 
   const bowl = integrateOutline(prof.bowl.segments);
   const foot = integrateOutline(prof.foot.segments);
-  const water = integrateOutline(prof.water.segments);
+  const water = integrateOutline(prof.brimWater.segments);
+  const working = integrateOutline(prof.water.segments);
 
   const bowlMassKg = (bowl.volume / MM3_PER_M3) * density;
   const footMassKg = (foot.volume / MM3_PER_M3) * density;
   const waterMassKg = (water.volume / MM3_PER_M3) * WATER_DENSITY_KG_M3;
   const filledMassKg = bowlMassKg + footMassKg + waterMassKg;
+  const workingWaterMassKg = (working.volume / MM3_PER_M3) * WATER_DENSITY_KG_M3;
+  const glassMassKg = bowlMassKg + footMassKg;
+  const pedestalMassKg = pedestalMass(params);
+  const totalMassKg = glassMassKg + workingWaterMassKg + pedestalMassKg;
 
-  const centreOfMassHeightMm =
-    (bowlMassKg * bowl.centroidZ + footMassKg * foot.centroidZ + waterMassKg * water.centroidZ) / filledMassKg;
+  const glassMoment = bowlMassKg * bowl.centroidZ + footMassKg * foot.centroidZ + workingWaterMassKg * working.centroidZ;
+  const centreOfMassHeightMm = glassMoment / (glassMassKg + workingWaterMassKg);
   const tipAngleDeg = radToDeg(Math.atan2(params.footBaseRadius, centreOfMassHeightMm - g.footBaseZ));
+  const wholeFontCentreOfMassHeightMm = (glassMoment + (pedestalMassKg * params.pedestalHeight) / 2) / totalMassKg;
+  const wholeTip = wholeFontTipRadiusMm(params);
+  const wholeFontTipAngleDeg = radToDeg(Math.atan2(wholeTip, wholeFontCentreOfMassHeightMm));
 
   const baseAreaM2 = Math.PI * (params.footBaseRadius / 1000) ** 2;
   const bearingPressureKPa = (filledMassKg * STANDARD_GRAVITY) / baseAreaM2 / 1000;
+
+  const tip = {
+    glassMassKg, workingWaterMassKg, pedestalMassKg,
+    outerRimRadiusMm: g.outerRimRadius, footBaseRadiusMm: params.footBaseRadius, wholeTipRadiusMm: wholeTip,
+    rimAboveFootBaseMm: g.rimZ - g.footBaseZ, rimAboveFloorMm: g.rimZ, hasPedestal: params.pedestalHeight > 0,
+    glassFixedToPedestal: params.glassFixedToPedestal, pedestalFixedToFloor: params.pedestalFixedToFloor,
+  };
+  const rimLoadToTipKg = rimLoadsToTip(tip);
+  const rimPushToTipKg = rimPushesToTip(tip);
 
   const contact = Math.min(params.flatRadius, params.footTopRadius);
   const layout = engravingLayout(params, g);
 
   return {
     capacityLitres: water.volume / MM3_PER_LITRE,
+    workingCapacityLitres: working.volume / MM3_PER_LITRE,
+    workingWaterMassKg,
+    pedestalMassKg,
+    totalMassKg,
+    wholeFontCentreOfMassHeightMm,
+    wholeFontTipAngleDeg,
+    rimLoadToTipKg,
+    rimPushToTipKg,
+    fixing: fixingAdvice(rimLoadToTipKg, rimPushToTipKg, {
+      glassFixed: !tip.hasPedestal || params.glassFixedToPedestal,
+      pedestalFixed: params.pedestalFixedToFloor,
+    }),
     bowlGlassVolumeCm3: bowl.volume / MM3_PER_CM3,
     footGlassVolumeCm3: foot.volume / MM3_PER_CM3,
     bowlMassKg,

@@ -41,8 +41,11 @@ export interface FontGeometry {
   /** top of the pedestal = underside of the foot */
   footBaseZ: number;
   footTopZ: number;
-  /** the wooden pedestal's drawn radius (not a parameter; for the picture only) */
+  /** half the pedestal's width: its radius when round (a square one is drawn round, as wide as its side) */
   pedestalRadius: number;
+  /** the working water level: its height and the interior's radius there */
+  waterLineZ: number;
+  waterLineRadius: number;
 }
 
 export function fontGeometry(p: FontDimensions): FontGeometry {
@@ -72,7 +75,9 @@ export function fontGeometry(p: FontDimensions): FontGeometry {
     outerRimRadius,
     footBaseZ,
     footTopZ,
-    pedestalRadius: Math.max(p.footBaseRadius * 1.2, p.footBaseRadius + 40),
+    pedestalRadius: p.pedestalWidth / 2,
+    waterLineZ: rimZ - p.workingDepthBelowRim,
+    waterLineRadius: Math.sqrt(Math.max(0, R * R - (centreZ - rimZ + p.workingDepthBelowRim) ** 2)),
   };
 }
 

@@ -29,8 +29,10 @@ export interface FontProfile {
   bowl: PartProfile;
   foot: PartProfile;
   pedestal: PartProfile;
-  /** the water when the bowl is full to the brim */
+  /** the water at the working level (what the pictures show) */
   water: PartProfile;
+  /** the water when the bowl is full to the brim */
+  brimWater: PartProfile;
 }
 
 /** Largest angle between two sampled points of an arc, in degrees. */
@@ -116,15 +118,20 @@ export function fontProfile(p: FontDimensions, options: SamplingOptions = {}): F
     { kind: "line", from: [rp, 0], to: [rp, g.footBaseZ] },
     { kind: "line", from: [rp, g.footBaseZ], to: [0, g.footBaseZ] },
   ];
-  const water: ProfileSegment[] = [
-    { kind: "arc", from: [0, g.interiorBottomZ], to: [a, g.rimZ], centreZ: cz, radius: R },
-    { kind: "line", from: [a, g.rimZ], to: [0, g.rimZ] },
+  const waterTo = (r: number, z: number): ProfileSegment[] => [
+    { kind: "arc", from: [0, g.interiorBottomZ], to: [r, z], centreZ: cz, radius: R },
+    { kind: "line", from: [r, z], to: [0, z] },
   ];
   return {
     geometry: g,
     bowl: part("bowl", bowl, sampling),
     foot: part("foot", foot, sampling),
     pedestal: part("pedestal", pedestal, sampling),
-    water: part("water", water, sampling),
+    // water at its working level may be shallower than the bowl: sampled finely enough for its own depth
+    water: part("water", waterTo(g.waterLineRadius, g.waterLineZ), {
+      ...sampling,
+      sagitta: Math.min(sampling.sagitta, options.arcSagittaMm ?? (p.depth - p.workingDepthBelowRim) / 500),
+    }),
+    brimWater: part("water", waterTo(a, g.rimZ), sampling),
   };
 }

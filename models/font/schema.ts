@@ -5,6 +5,7 @@
  */
 import { z } from "zod";
 import { glassKinds } from "./materials";
+import { pedestalMaterialKeys, pedestalMaterials, pedestalShapes } from "./pedestal";
 import { fontFieldLabel } from "./fields";
 import { capHeightForBase, capSphereRadius } from "./geometry";
 import type { FontFieldName, FontParameters } from "./types";
@@ -17,6 +18,34 @@ const numberIssue = (label: string) => (iss: { input: unknown }) =>
   iss.input === undefined || iss.input === null || iss.input === ""
     ? `${label} is required.`
     : `${label} must be a number.`;
+
+/** A length that may be 0 (a pedestal of no height, water to the brim, a solid pedestal). */
+function lengthOrZero(field: FontFieldName) {
+  const label = fontFieldLabel[field];
+  return z
+    .number({ error: numberIssue(label) })
+    .min(0, `${label} must be 0 or more.`)
+    .max(MAX_LENGTH_MM, `${label} must be at most ${MAX_LENGTH_MM} mm (3 m, about 118 in).`);
+}
+
+const yesNo = (field: FontFieldName) => z.boolean({ error: `${fontFieldLabel[field]} must be yes or no.` });
+
+/**
+ * Values a parameter set saved before these fields existed is read with: the pedestal the demo has
+ * always drawn (380 mm round, solid oak), nothing fixed (the cautious assumption) and water 50 mm
+ * below the rim.
+ */
+export const fontParameterDefaults = {
+  pedestalShape: "round",
+  pedestalWidth: 380,
+  pedestalMaterial: "oak",
+  pedestalHollowWall: 0,
+  glassFixedToPedestal: false,
+  pedestalFixedToFloor: false,
+  workingDepthBelowRim: 50,
+} as const;
+
+const materialList = pedestalMaterialKeys.map((k) => pedestalMaterials[k].label.toLowerCase()).join(", ");
 
 function length(field: FontFieldName) {
   const label = fontFieldLabel[field];
@@ -35,7 +64,18 @@ const baseSchema = z.object(
     footBaseRadius: length("footBaseRadius"),
     footTopRadius: length("footTopRadius"),
     footHeight: length("footHeight"),
-    pedestalHeight: length("pedestalHeight"),
+    pedestalHeight: lengthOrZero("pedestalHeight"),
+    pedestalShape: z
+      .enum(pedestalShapes, { error: "Pedestal shape must be round or square." })
+      .default(fontParameterDefaults.pedestalShape),
+    pedestalWidth: length("pedestalWidth").default(fontParameterDefaults.pedestalWidth),
+    pedestalMaterial: z
+      .enum(pedestalMaterialKeys, { error: `Pedestal material must be one of: ${materialList}.` })
+      .default(fontParameterDefaults.pedestalMaterial),
+    pedestalHollowWall: lengthOrZero("pedestalHollowWall").default(fontParameterDefaults.pedestalHollowWall),
+    glassFixedToPedestal: yesNo("glassFixedToPedestal").default(fontParameterDefaults.glassFixedToPedestal),
+    pedestalFixedToFloor: yesNo("pedestalFixedToFloor").default(fontParameterDefaults.pedestalFixedToFloor),
+    workingDepthBelowRim: lengthOrZero("workingDepthBelowRim").default(fontParameterDefaults.workingDepthBelowRim),
     glass: z.enum(glassKinds, {
       error: "Glass must be one of: soda-lime, low-iron or borosilicate.",
     }),
@@ -58,7 +98,11 @@ const okSize = (v: unknown): v is number => typeof v === "number" && Number.isFi
 export const fontParametersSchema = baseSchema.superRefine((p: Partial<Record<keyof FontParameters, unknown>>, ctx) => {
   const add = (path: FontFieldName, message: string) => ctx.addIssue({ code: "custom", path: [path], message });
   const { rimRadius: a, depth: d, wallThickness: t, flatRadius: f } = p;
+  pedestalChecks(p, add);
   if (!okSize(a) || !okSize(d) || !okSize(t)) return;
+  const w = p.workingDepthBelowRim;
+  if (typeof w === "number" && w >= d)
+    add("workingDepthBelowRim", "Water level below the rim must be less than the depth, or the bowl would be empty.");
   if (d > a) {
     add("depth", "Depth must not be more than the rim radius: the bowl would be deeper than a hemisphere.");
     return;
@@ -95,6 +139,16 @@ export const fontParametersSchema = baseSchema.superRefine((p: Partial<Record<ke
   when: (payload) => typeof payload.value === "object" && payload.value !== null,
 });
 
+type Add = (path: FontFieldName, message: string) => void;
+
+function pedestalChecks(p: Partial<Record<keyof FontParameters, unknown>>, add: Add) {
+  const { pedestalWidth: w, pedestalHollowWall: t, pedestalHeight: h, footBaseRadius: b } = p;
+  if (okSize(w) && typeof t === "number" && t > 0 && 2 * t >= w)
+    add("pedestalHollowWall", "Hollow pedestal wall is too thick: two walls would be wider than the pedestal.");
+  if (okSize(w) && okSize(b) && typeof h === "number" && h > 0 && w < 2 * b)
+    add("pedestalWidth", "Pedestal width must be at least the foot's base (twice the foot base radius): the foot would overhang it.");
+}
+
 /** The type the schema produces: the same as FontParameters. */
 export type FontParametersInput = z.input<typeof fontParametersSchema>;
 const _sameShape: FontParameters = {} as z.output<typeof fontParametersSchema>;
@@ -113,6 +167,7 @@ export const defaultFontParameters: FontParameters = {
   footTopRadius: 110,
   footHeight: 250,
   pedestalHeight: 550,
+  ...fontParameterDefaults,
   glass: "low-iron",
   engravingCount: 3,
   engravingStartAngle: 90,

@@ -1,4 +1,5 @@
 import type { GlassKind } from "./materials";
+import type { PedestalMaterialKey, PedestalShape } from "./pedestal";
 
 /** The parts a person can point at on the model. */
 export type FontPart = "bowl" | "foot" | "pedestal";
@@ -12,7 +13,18 @@ export interface FontParameters {
   footBaseRadius: number;
   footTopRadius: number;
   footHeight: number;
+  /** 0: the foot stands on the floor */
   pedestalHeight: number;
+  pedestalShape: PedestalShape;
+  /** diameter of a round pedestal, side of a square one */
+  pedestalWidth: number;
+  pedestalMaterial: PedestalMaterialKey;
+  /** wall of a hollow pedestal; 0 = solid */
+  pedestalHollowWall: number;
+  glassFixedToPedestal: boolean;
+  pedestalFixedToFloor: boolean;
+  /** water level below the rim; 0 = to the brim */
+  workingDepthBelowRim: number;
   glass: GlassKind;
   engravingCount: number;
   engravingStartAngle: number;
@@ -30,6 +42,8 @@ export type FontDimensions = Pick<
   | "footTopRadius"
   | "footHeight"
   | "pedestalHeight"
+  | "pedestalWidth"
+  | "workingDepthBelowRim"
 >;
 
 export type FontFieldName = keyof FontParameters;

@@ -36,7 +36,11 @@ export const TRAIL_ACTIONS = [
   "meeting vote recorded",
   "decision recorded",
   // release, fabrication and handover
+  "permission required",
+  "permission dropped",
+  "no permission required",
   "permission recorded",
+  "condition answered",
   "deposit invoiced",
   "deposit paid",
   "deposit waived",

@@ -69,6 +69,12 @@ export function describeEvent(e: Pick<TrailEvent, "action" | "payload" | "subjec
       return `Recorded the decision on Revision ${s(p.number)}: ${s(p.outcomeLabel) || s(p.outcome)}${n ? ` (${n} condition${n === 1 ? "" : "s"})` : ""}.`;
     }
     case "studio settings changed": return "Changed the studio's settings.";
+    case "permission required": return `Listed a permission the commission needs: ${s(p.name)}${p.authority ? ` (from ${s(p.authority)})` : ""}.`;
+    case "permission dropped": return `Took ${s(p.name)} off the list of permissions needed.`;
+    case "no permission required": return `Recorded that no outside permission is needed: ${said(p.reason)}`;
+    case "permission recorded": return `Recorded ${s(p.name)}: granted by ${s(p.authority)} on ${s(p.grantedOn)}, reference ${s(p.reference)}.`;
+    case "condition answered": return `Answered condition ${s(p.condition)} of the approval of Revision ${s(p.number)}: ${said(p.answer)}`;
+    case "released to fabrication": return `Released Revision ${s(p.number)} to fabrication (content hash ${s(p.contentHash).slice(0, 12)}…).`;
     default: return `${e.action[0].toUpperCase()}${e.action.slice(1)}.`;
   }
 }

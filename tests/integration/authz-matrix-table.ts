@@ -103,6 +103,19 @@ export const TABLE: Row[] = [
   r("api/comments/[commentId]/replies", "POST", "comment", PEOPLE, { body: () => ({ body: "Agreed." }) }),
   r("api/comments/[commentId]/resolve", "POST", "comment", STUDIO),
   r("api/comments/[commentId]", "PATCH", "comment", "401 404 403 ok 403 403 403 403", { body: () => ({ body: "The engraving depth looks right." }) }), // its author, the member
+  // Release to fabrication: the rule's answer for its people; the owner alone releases (not ready: 409).
+  r("api/commissions/[commissionId]/release", "GET", "commission", PEOPLE),
+  r("api/commissions/[commissionId]/release", "POST", "commission", "401 404 403 403 403 403 403 409"),
+  r("api/commissions/[commissionId]/permissions", "GET", "commission", PEOPLE),
+  r("api/commissions/[commissionId]/permissions", "POST", "freshCommission", CHAIR, { body: () => ({ name: "Faculty", authority: "The diocese" }) }),
+  r("api/commissions/[commissionId]/conditions", "GET", "commission", PEOPLE),
+  // No approval as noted yet: the studio is told so (409); everyone else is refused first.
+  r("api/commissions/[commissionId]/conditions/[number]", "POST", "current", "401 404 403 403 403 403 409 409",
+    { body: () => ({ answer: "The wren badge is cut into the foot." }) }),
+  r("api/permissions/[permissionId]/record", "POST", "permission", "401 404 403 403 403 422 403 403", { form: () => form({ authority: "The diocese", reference: "F/2026/14", grantedOn: "2026-11-30" }) }),
+  r("api/permissions/[permissionId]/remove", "POST", "permission", CHAIR),
+  // Nothing recorded yet, so there is no document to read for anyone.
+  r("api/permissions/[permissionId]/document", "GET", "permission", "401 404 404 404 404 404 404 404"),
   r("api/formats/model-point", "GET", "none", PUBLIC),
   r("api/health", "GET", "none", PUBLIC),
   r("api/me/notices", "PATCH", "none", SIGNED, { body: () => ({ notices: "digest" }) }),

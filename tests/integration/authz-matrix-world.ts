@@ -13,6 +13,7 @@ import { addAttachment } from "@/lib/dal/attachments";
 import { openBallot } from "@/lib/dal/ballots";
 import { createCommission } from "@/lib/dal/commissions";
 import { updateRules } from "@/lib/dal/rules";
+import { setPermissionsNeeded } from "@/lib/dal/permissions";
 import { postComment, resolveThread } from "@/lib/dal/comments";
 import { invitePerson } from "@/lib/dal/people";
 import { circulate, createDraft, updateDraft } from "@/lib/dal/revisions-write";
@@ -144,14 +145,14 @@ async function openBallotOn(side: Side, revisionId: number): Promise<number> {
 }
 
 /** What a factory hands a row: the ids its URL or arguments need. */
-export interface Obj { commissionId: number; revisionId: number; number: number; attachmentId: number; commentId: number; ballotId: number; elsewhereAttachmentId: number }
+export interface Obj { commissionId: number; revisionId: number; number: number; attachmentId: number; commentId: number; ballotId: number; elsewhereAttachmentId: number; permissionId: number }
 
 async function numberOf(revisionId: number) {
   const [r] = await getDb().select({ number: revisions.number }).from(revisions).where(eq(revisions.id, revisionId));
   return r.number;
 }
 const obj = async (side: Side, o: Partial<Obj>): Promise<Obj> => ({
-  commissionId: side.commissionId, revisionId: 0, attachmentId: 0, commentId: 0, ballotId: 0, elsewhereAttachmentId: side.elsewhereAttachmentId, ...o,
+  commissionId: side.commissionId, revisionId: 0, attachmentId: 0, commentId: 0, ballotId: 0, permissionId: 0, elsewhereAttachmentId: side.elsewhereAttachmentId, ...o,
   number: o.revisionId ? await numberOf(o.revisionId) : 0,
 });
 
@@ -190,6 +191,11 @@ export const FACTORIES = {
   openBallot: async (side: Side) => {
     const revisionId = await currentId(side);
     return obj(side, { revisionId, ballotId: await openBallotOn(side, revisionId) });
+  },
+  /** A permission the chair has just put on the commission's list, not yet recorded. */
+  permission: async (side: Side) => {
+    const list = await setPermissionsNeeded(side.chair, side.commissionId, { name: `Faculty ${Date.now()}${Math.random()}`.slice(0, 60), authority: "The diocese" });
+    return obj(side, { permissionId: list.permissions.at(-1)!.id });
   },
   freshOpenBallot: async (side: Side) => {
     const revisionId = await circulateDraft(side);

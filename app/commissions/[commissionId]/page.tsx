@@ -8,6 +8,8 @@ import { ROLE_LABELS } from "@/models/permissions/policy";
 import { listRevisions } from "@/lib/dal/revisions-read";
 import { getBallotState } from "@/lib/dal/ballots";
 import { CurrentRevision } from "@/components/current-revision";
+import { getReleaseStatus } from "@/lib/dal/release";
+import { ReleaseCard } from "@/components/release/ReleaseCard";
 
 export const metadata: Metadata = { title: "Commission" };
 
@@ -18,12 +20,14 @@ export default async function CommissionPage({ params }: { params: Promise<{ com
   const current = revisions.find((r) => r.state === "circulated" || r.state === "decided") ?? null;
   const draft = revisions.find((r) => r.state === "draft") ?? null;
   const ballot = current ? await getBallotState(viewer, current.id) : null;
+  const release = await getReleaseStatus(viewer, c.id);
   const committee = c.people.filter((p) => p.side === "committee");
   return (
     <div className="grid gap-4 lg:grid-cols-3">
       <div className="grid gap-4 lg:col-span-2">
         <NextSteps commission={c} current={current} ballot={ballot} />
         <CurrentRevision commissionId={c.id} revision={current} ballot={ballot} draft={draft} />
+        <ReleaseCard commissionId={c.id} status={release} mayRelease={Boolean(c.you.can["release.release"])} linkToDetails />
         <Card title="How this committee decides" action={c.rulesEditable ? <Link href={`/commissions/${c.id}/rules`} className="min-h-11 py-2">{c.rulesConfirmed ? "Change the rules" : "Confirm the rules"}</Link> : undefined}>
           <RulesSummary rules={c.rules} />
           {!c.rulesConfirmed && <p className="mt-2 text-sm text-ink-soft" data-testid="rules-proposed">Proposed by the studio; the chair confirms or changes them before the first vote.</p>}

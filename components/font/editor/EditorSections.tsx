@@ -15,6 +15,7 @@ const groups: { key: (typeof fontFields)[number]["group"]; title: string }[] = [
   { key: "bowl", title: "Bowl" },
   { key: "foot", title: "Foot" },
   { key: "pedestal", title: "Pedestal" },
+  { key: "water", title: "Water" },
   { key: "glass", title: "Glass" },
   { key: "engravings", title: "Engravings" },
 ];

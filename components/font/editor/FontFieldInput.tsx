@@ -13,6 +13,9 @@ export interface FontFieldInputProps {
 const control =
   "block w-full min-h-11 rounded-md border border-line bg-card px-3 py-2 text-base text-ink aria-[invalid=true]:border-danger read-only:bg-paper disabled:bg-paper";
 
+const optionsFor = (field: FontFieldInfo) =>
+  field.kind === "glass" ? glassKinds.map((k) => ({ value: k, label: glassMaterials[k].label })) : (field.options ?? []);
+
 /** One parameter: its label, the entry, its unit, a hint, and its errors right beside it. */
 export function FontFieldInput({ field, idPrefix, value, unit, errors, readOnly, onChange }: FontFieldInputProps) {
   const id = `${idPrefix}-${field.name}`;
@@ -26,7 +29,19 @@ export function FontFieldInput({ field, idPrefix, value, unit, errors, readOnly,
         {field.label}
       </label>
       <div className="mt-1 flex items-center gap-2">
-        {field.kind === "glass" ? (
+        {field.kind === "flag" ? (
+          <input
+            id={id}
+            name={field.name}
+            type="checkbox"
+            checked={value === "true"}
+            disabled={readOnly}
+            aria-invalid={hasError || undefined}
+            aria-describedby={describedBy}
+            onChange={(e) => onChange(e.target.checked ? "true" : "false")}
+            className="h-6 w-6 accent-ink"
+          />
+        ) : field.kind === "glass" || field.kind === "choice" ? (
           <select
             id={id}
             name={field.name}
@@ -37,9 +52,9 @@ export function FontFieldInput({ field, idPrefix, value, unit, errors, readOnly,
             onChange={(e) => onChange(e.target.value)}
             className={control}
           >
-            {glassKinds.map((k) => (
-              <option key={k} value={k}>
-                {glassMaterials[k].label}
+            {optionsFor(field).map((o) => (
+              <option key={o.value} value={o.value}>
+                {o.label}
               </option>
             ))}
           </select>

@@ -43,21 +43,53 @@ export function draftFromParams(p: FontParameters, unit: LengthUnit): DraftState
   return { unit, text, exactMm };
 }
 
-/** A typed number, accepting a decimal comma; text that is not a number is passed on as text. */
+/**
+ * Why a typed number cannot be read without guessing, or null. Figures print with a comma between
+ * thousands ("1,524 mm"), so "1,200" could mean 1200 or 1.2: refused. A comma followed by one, two or
+ * four or more digits cannot be a thousands separator and is read as a decimal comma; a number with
+ * both a comma and a point is refused rather than read in either convention.
+ */
+export function typedNumberProblem(label: string, s: string): string | null {
+  const t = s.trim();
+  if (!t.includes(",")) return null;
+  if (t.includes("."))
+    return `${label}: "${t}" mixes a comma and a point. Type the number with a point for decimals and no commas, e.g. 1200.5.`;
+  if (/^[-+]?\d{1,3}(,\d{3})+$/.test(t))
+    return `${label}: "${t}" could mean ${t.replace(/,/g, "")} or ${t.replace(",", ".")}. Type it without the comma (${t.replace(/,/g, "")}) or with a point (${t.replace(",", ".")}).`;
+  return null;
+}
+
+/** A typed number, accepting a decimal comma; text that is not a number, or is ambiguous, is passed on as text. */
 export function parseTyped(s: string): number | string | undefined {
   const t = s.trim();
   if (t === "") return undefined;
-  const normal = t.includes(".") ? t : t.replace(",", ".");
+  if (typedNumberProblem("", t)) return t;
+  const normal = t.replace(",", ".");
   const n = Number(normal);
   return Number.isFinite(n) && /^[-+]?(\d+\.?\d*|\.\d+)(e[-+]?\d+)?$/i.test(normal) ? n : t;
+}
+
+/** The typed numbers that cannot be read without guessing, by field, with a message naming each. */
+export function draftProblems(d: DraftState): Partial<Record<FontFieldName, string[]>> {
+  const out: Partial<Record<FontFieldName, string[]>> = {};
+  for (const f of fontFields) {
+    if (f.kind === "glass" || f.kind === "choice" || f.kind === "flag" || d.exactMm[f.name] !== undefined) continue;
+    const problem = typedNumberProblem(f.label, d.text[f.name]);
+    if (problem) out[f.name] = [problem];
+  }
+  return out;
 }
 
 /** The values to validate, in millimetres and degrees. */
 export function candidateFromDraft(d: DraftState): Record<FontFieldName, unknown> {
   const out = {} as Record<FontFieldName, unknown>;
   for (const f of fontFields) {
-    if (f.kind === "glass") {
+    if (f.kind === "glass" || f.kind === "choice") {
       out[f.name] = d.text[f.name];
+      continue;
+    }
+    if (f.kind === "flag") {
+      out[f.name] = d.text[f.name] === "true";
       continue;
     }
     const exact = d.exactMm[f.name];

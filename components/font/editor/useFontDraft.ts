@@ -2,7 +2,7 @@
 
 import { useEffect, useRef, useState } from "react";
 import { evaluateFont, type FontEvaluation, type FontModel, type FontParameters, type LengthUnit } from "@/models/font";
-import { candidateFromDraft, draftFromParams, type DraftState } from "./draft";
+import { candidateFromDraft, draftFromParams, draftProblems, type DraftState } from "./draft";
 
 export interface FontDraft {
   draft: DraftState;
@@ -14,7 +14,12 @@ export interface FontDraft {
 }
 
 function evaluated(draft: DraftState, before: FontModel | null) {
-  const evaluation = evaluateFont(candidateFromDraft(draft));
+  const ev = evaluateFont(candidateFromDraft(draft));
+  const problems = draftProblems(draft);
+  // An ambiguous number is refused with its own message, never guessed at.
+  const evaluation: FontEvaluation = Object.keys(problems).length
+    ? { ok: false, fieldErrors: { ...(ev.ok ? {} : ev.fieldErrors), ...problems }, formErrors: ev.ok ? [] : ev.formErrors }
+    : ev;
   return { draft, evaluation, lastValid: evaluation.ok ? evaluation : before };
 }
 

@@ -98,8 +98,8 @@ function CutFaces({ cuts, pick, water }: { cuts: NonNullable<FontGeometries["cut
 
 function WaterSurface({ model, section }: { model: FontModel; section: boolean }) {
   return (
-    <mesh position={[0, model.profile.geometry.rimZ - 0.6, 0]} rotation={[-Math.PI / 2, 0, 0]} renderOrder={3}>
-      <circleGeometry args={[model.params.rimRadius - 0.5, 96, 0, section ? Math.PI : Math.PI * 2]} />
+    <mesh position={[0, model.profile.geometry.waterLineZ - 0.6, 0]} rotation={[-Math.PI / 2, 0, 0]} renderOrder={3}>
+      <circleGeometry args={[model.profile.geometry.waterLineRadius - 0.5, 96, 0, section ? Math.PI : Math.PI * 2]} />
       <meshStandardMaterial color={sceneColours.water} transparent opacity={0.6} roughness={0.1} depthWrite={false} />
     </mesh>
   );

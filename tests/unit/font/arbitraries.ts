@@ -1,5 +1,12 @@
 import fc from "fast-check";
-import { capHeightForBase, capSphereRadius, glassKinds, type FontParameters } from "@/models/font";
+import {
+  capHeightForBase,
+  capSphereRadius,
+  glassKinds,
+  pedestalMaterialKeys,
+  pedestalShapes,
+  type FontParameters,
+} from "@/models/font";
 
 const num = (min: number, max: number) => fc.double({ min, max, noNaN: true, noDefaultInfinity: true });
 
@@ -16,7 +23,14 @@ export const validFontParams: fc.Arbitrary<FontParameters> = fc
     footBaseRadius: num(20, 1500),
     footTopRadius: num(20, 1500),
     footHeight: num(10, 1500),
-    pedestalHeight: num(10, 2000),
+    pedestalHeight: fc.oneof(num(10, 2000), fc.constant(0)),
+    pedestalShape: fc.constantFrom(...pedestalShapes),
+    widthFrac: num(1, 1.5),
+    pedestalMaterial: fc.constantFrom(...pedestalMaterialKeys),
+    hollowFrac: fc.oneof(fc.constant(0), num(0.05, 0.9)),
+    glassFixedToPedestal: fc.boolean(),
+    pedestalFixedToFloor: fc.boolean(),
+    workingFrac: num(0, 0.95),
     glass: fc.constantFrom(...glassKinds),
     engravingCount: fc.integer({ min: 0, max: 12 }),
     engravingStartAngle: num(-360, 360),
@@ -38,6 +52,13 @@ export const validFontParams: fc.Arbitrary<FontParameters> = fc
       footTopRadius: v.footTopRadius,
       footHeight: v.footHeight,
       pedestalHeight: v.pedestalHeight,
+      pedestalShape: v.pedestalShape,
+      pedestalWidth: Math.min(3000, 2 * v.footBaseRadius * v.widthFrac),
+      pedestalMaterial: v.pedestalMaterial,
+      pedestalHollowWall: (v.hollowFrac * Math.min(3000, 2 * v.footBaseRadius * v.widthFrac)) / 2,
+      glassFixedToPedestal: v.glassFixedToPedestal,
+      pedestalFixedToFloor: v.pedestalFixedToFloor,
+      workingDepthBelowRim: v.workingFrac * depth,
       glass: v.glass,
       engravingCount: v.engravingCount,
       engravingStartAngle: v.engravingStartAngle,

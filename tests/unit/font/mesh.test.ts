@@ -36,7 +36,7 @@ describe("the 3D mesh encloses the volume the figures report", () => {
     expect(bowl).toBeGreaterThan(0); // faces wind outwards
     expect(rel(bowl, f.bowlGlassVolumeCm3)).toBeLessThan(0.005);
     expect(rel(foot, f.footGlassVolumeCm3)).toBeLessThan(0.005);
-    expect(rel(water, f.capacityLitres)).toBeLessThan(0.005);
+    expect(rel(water, f.workingCapacityLitres)).toBeLessThan(0.005);
   });
 
   it("any valid font: within 0.5 %", () => {
@@ -47,11 +47,11 @@ describe("the 3D mesh encloses the volume the figures report", () => {
         const bowl = enclosedVolume(buildLathe(prof.bowl.points)) / 1000;
         const water = enclosedVolume(buildLathe(prof.water.points)) / 1e6;
         expect(rel(bowl, f.bowlGlassVolumeCm3)).toBeLessThan(0.005);
-        expect(rel(water, f.capacityLitres)).toBeLessThan(0.005);
+        expect(rel(water, f.workingCapacityLitres)).toBeLessThan(0.005);
       }),
       { numRuns: 40 },
     );
-  });
+  }, 60_000); // 40 meshes: slow on a shared machine
 });
 
 describe("model ↔ scene coordinates", () => {

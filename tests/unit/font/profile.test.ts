@@ -22,7 +22,7 @@ describe("profile integration equals the closed forms", () => {
         const R = g.sphereRadius;
         const Ro = g.outerSphereRadius;
         // interior cap V = πd²(3R − d)/3
-        const water = integrateOutline(prof.water.segments);
+        const water = integrateOutline(prof.brimWater.segments);
         expect(rel(water.volume, sphericalCapVolume(R, p.depth))).toBeLessThan(1e-9);
         // centroid of a cap: 3(2R − h)²/4(3R − h) below the centre (pointing down here)
         expect(water.centroidZ).toBeCloseTo(g.centreZ - capCentroidFromCentre(R, p.depth), 6);

@@ -55,6 +55,30 @@ describe("refusals name the field and say why", () => {
     expect(errorsFor({ ...p, glass: "lead crystal" }).glass?.[0]).toMatch(/Glass must be/);
   });
 
+  it("a pedestal of height 0 is allowed: the foot stands on the floor (common practice)", () => {
+    expect(parseFontParameters({ ...p, pedestalHeight: 0 }).ok).toBe(true);
+    expect(errorsFor({ ...p, pedestalHeight: -1 }).pedestalHeight?.[0]).toBe("Pedestal height must be 0 or more.");
+  });
+
+  it("pedestal and water refusals name their field", () => {
+    expect(errorsFor({ ...p, pedestalHollowWall: 190 }).pedestalHollowWall?.[0]).toMatch(/Hollow pedestal wall is too thick/);
+    expect(errorsFor({ ...p, pedestalWidth: 250 }).pedestalWidth?.[0]).toMatch(/Pedestal width .*foot/);
+    expect(errorsFor({ ...p, pedestalMaterial: "balsa" }).pedestalMaterial?.[0]).toMatch(/Pedestal material must be one of: oak, ash/);
+    expect(errorsFor({ ...p, pedestalShape: "hexagon" }).pedestalShape?.[0]).toBe("Pedestal shape must be round or square.");
+    expect(errorsFor({ ...p, glassFixedToPedestal: "yes" }).glassFixedToPedestal?.[0]).toMatch(/must be yes or no/);
+    expect(errorsFor({ ...p, workingDepthBelowRim: 150 }).workingDepthBelowRim?.[0]).toMatch(/less than the depth/);
+  });
+
+  it("a set saved without the new fields loads with the stated defaults", () => {
+    const old = { rimRadius: 280, depth: 150, wallThickness: 28, flatRadius: 110, footBaseRadius: 150, footTopRadius: 110,
+      footHeight: 250, pedestalHeight: 550, glass: "low-iron", engravingCount: 3, engravingStartAngle: 90, engravingDrop: 45 };
+    const r = parseFontParameters(old);
+    expect(r.ok && r.params).toMatchObject({
+      pedestalShape: "round", pedestalWidth: 380, pedestalMaterial: "oak", pedestalHollowWall: 0,
+      glassFixedToPedestal: false, pedestalFixedToFloor: false, workingDepthBelowRim: 50,
+    });
+  });
+
   it("several problems are reported together", () => {
     const e = errorsFor({ ...p, depth: 300, footHeight: "x" });
     expect(Object.keys(e).sort()).toEqual(["depth", "footHeight"]);

@@ -12,7 +12,7 @@ const actors: Record<string, Actor> = {
 };
 
 // The expected table, written out by hand from the roles of the product's design (owner ⊇ designer,
-// chair ⊇ member, adviser: view and comment only, treasurer: pays the deposit).
+// chair ⊇ member, adviser: view and comment only, treasurer or chair: pays the deposit; owner: releases and sets the money).
 const Y = true, N = false;
 const expected: Record<Action, [boolean, boolean, boolean, boolean, boolean, boolean, boolean]> = {
   //                         owner designer chair member treasurer adviser outsider
@@ -38,7 +38,10 @@ const expected: Record<Action, [boolean, boolean, boolean, boolean, boolean, boo
   "decision.record":         [N, N, Y, N, N, N, N],
   "permission.record":       [N, N, Y, N, N, N, N],
   "handover.sign":           [N, N, Y, N, N, N, N],
-  "deposit.pay":             [N, N, N, N, Y, N, N],
+  "release.release":         [Y, N, N, N, N, N, N],
+  "money.set":               [Y, N, N, N, N, N, N],
+  "condition.answer":        [Y, Y, N, N, N, N, N],
+  "deposit.pay":             [N, N, Y, N, Y, N, N],
   "deposit.waive":           [Y, N, N, N, N, N, N],
   "studio.manage":           [Y, N, N, N, N, N, N],
   "trail.view":              [Y, Y, Y, Y, Y, Y, N],
