@@ -155,9 +155,15 @@ describe("a vote taken at a meeting", () => {
     expect(s.ballot).toMatchObject({ kind: "meeting", status: "closed", meetingDate: today });
     expect(s.whoVotedHow).toEqual([]);
     expect(s.youMayVote).toBe(false);
+    // One route to a result: a second meeting vote on the same revision (say, a 'recount') is refused.
+    const before = await snapshot(ids.commissionId);
+    await expect(recordMeetingVote(await as("chair"), rev.id, { meetingDate: today, minutesRef: MINUTES, counts: { inFavour: 0, against: 3, abstain: 0 } }))
+      .rejects.toThrow(/already recorded \(carried\)/);
+    expect(await snapshot(ids.commissionId)).toEqual(before);
   });
 
   it("refuses bad input by field and changes nothing", async () => {
+    rev = await circulateNext(ids.commissionId, "Engravings a little deeper.");
     const chair = await as("chair");
     const cases: [unknown, string, RegExp][] = [
       [{ meetingDate: "2099-01-01", minutesRef: MINUTES, counts: { inFavour: 1, against: 0, abstain: 0 } }, "meetingDate", /future/],
