@@ -120,6 +120,9 @@ describe("Gallery", () => {
 class FakeXhr {
   static answers: { status: number; body: unknown }[] = [];
   static sent: FormData[] = [];
+  /** While held, an upload stops at half way until the test lets it finish (no race with real timers). */
+  static held = false;
+  static waiting: (() => void)[] = [];
   upload: { onprogress?: (e: { lengthComputable: boolean; loaded: number; total: number }) => void } = {};
   status = 0; responseText = ""; responseType = "";
   onload?: () => void; onerror?: () => void; onabort?: () => void;
@@ -127,9 +130,11 @@ class FakeXhr {
   send(body: FormData) {
     FakeXhr.sent.push(body);
     const answer = FakeXhr.answers.shift()!;
+    const finish = () => { this.status = answer.status; this.responseText = JSON.stringify(answer.body); this.onload?.(); };
     setTimeout(() => {
       this.upload.onprogress?.({ lengthComputable: true, loaded: 50, total: 100 });
-      setTimeout(() => { this.status = answer.status; this.responseText = JSON.stringify(answer.body); this.onload?.(); }, 5);
+      if (FakeXhr.held) FakeXhr.waiting.push(finish);
+      else setTimeout(finish, 5);
     }, 5);
   }
 }
@@ -148,10 +153,14 @@ describe("AttachmentUploader", () => {
     expect(items().map((i) => i.dataset.status)).toEqual(["ready", "ready", "refused"]);
     expect(items()[2].textContent).toContain("“notes.docx” is not a kind of file");
 
-    await act(async () => { byText("Upload 2 files").click(); await new Promise((r) => setTimeout(r, 8)); });
+    FakeXhr.held = true;
+    await act(async () => { byText("Upload 2 files").click(); });
+    await vi.waitFor(() => expect(FakeXhr.waiting).toHaveLength(1), { timeout: 2000 });
+    await act(async () => { await new Promise((r) => setTimeout(r, 0)); });
     expect(host.querySelector('[role="progressbar"]')!.getAttribute("aria-valuenow")).toBe("50");
-    await act(async () => { await new Promise((r) => setTimeout(r, 60)); });
-    expect(items().map((i) => i.dataset.status)).toEqual(["done", "refused", "refused"]);
+    FakeXhr.held = false;
+    await act(async () => { FakeXhr.waiting.splice(0).forEach((f) => f()); await new Promise((r) => setTimeout(r, 60)); });
+    await vi.waitFor(() => expect(items().map((i) => i.dataset.status)).toEqual(["done", "refused", "refused"]), { timeout: 2000 });
     expect(items()[0].querySelector('[role="progressbar"]')!.getAttribute("aria-valuenow")).toBe("100");
     expect(items()[1].textContent).toContain("“b.png” is a program");
     expect(onUploaded).toHaveBeenCalledTimes(1);
