@@ -48,10 +48,6 @@ async function png(): Promise<Buffer> {
 /** A circulated revision of the test's own with a file, an open ballot and a comment, and every id the routes take. */
 async function fixtures(designer: Page, chair: Page) {
   const { title, commissionId } = await newCommissionViaForm(designer, "Font for the guard test", "St Ia's — Fabric Committee", "St Ia's, the west end");
-  await designer.goto(`/commissions/${commissionId}/rules`);
-  await designer.getByLabel("Authority for electronic ballots").fill("Standing order 2: electronic ballots between meetings");
-  await designer.getByRole("button", { name: "Save the rules" }).click();
-  await expect(designer).toHaveURL(new RegExp(`/commissions/${commissionId}$`));
   await designer.goto(`/commissions/${commissionId}/revisions/new`);
   await designer.getByLabel("What changed and why (you can finish this later)").fill("First proposal: a cast bowl on a ground foot.");
   await designer.getByRole("button", { name: "Start the draft" }).click();
@@ -88,13 +84,21 @@ test("every mutating API route refuses a missing or foreign Origin, a cross-site
   const chairEmail = await makePerson("chair", { commissionTitle: f.title });
   const memberEmail = await makePerson("member", { commissionTitle: f.title });
   await signInAs(chair, chairEmail);
+  // The rules are the committee's: the chair sets the authority for electronic ballots (and so confirms them).
+  await chair.goto(`/commissions/${f.commissionId}/rules`);
+  await chair.getByLabel("Authority for electronic ballots").fill("Standing order 2: electronic ballots between meetings");
+  await chair.getByRole("button", { name: "Save the rules" }).click();
+  await expect(chair).toHaveURL(new RegExp(`/commissions/${f.commissionId}$`));
+  const listed = await chair.request.post(`/api/commissions/${f.commissionId}/permissions`, { data: { name: "Faculty", authority: "The diocese" } });
+  expect(listed.status(), await listed.text()).toBeLessThan(300);
+  const permissionId = ((await listed.json()) as { permissions: { id: number }[] }).permissions[0].id;
   const opened = await chair.request.post(`/api/revisions/${f.revisionId}/ballot`, { data: { closesAt: new Date(Date.now() + 3 * 86400_000).toISOString() } });
   expect(opened.status(), await opened.text()).toBe(201);
   const posted = await chair.request.post(`/api/revisions/${f.revisionId}/comments`, { data: { body: "Is the foot ground or polished?" } });
   expect(posted.status()).toBe(201);
   const commentId = ((await posted.json()) as { id: number }).id;
   const [ballot] = await sql<{ id: number }[]>("SELECT id FROM ballots WHERE revision_id = ?", [f.revisionId]);
-  const ids: Record<string, number> = { attachmentId: f.attachmentId, ballotId: ballot.id, commentId, revisionId: f.revisionId, commissionId: f.commissionId };
+  const ids: Record<string, number> = { attachmentId: f.attachmentId, ballotId: ballot.id, commentId, revisionId: f.revisionId, commissionId: f.commissionId, permissionId, number: 1 };
   const fill = (url: string) => url.replace(/\[(\w+)\]/g, (_, k: string) => {
     if (!(k in ids)) throw new Error(`no test id for the route segment [${k}] in ${url}: add one`);
     return String(ids[k]);
