@@ -39,7 +39,11 @@ export function RevisionView({ initial, commissionId }: { initial: RevisionDto; 
         {rev.contentHash && (
           <p className="flex flex-wrap items-center gap-2 text-sm text-ink-soft" data-testid="content-hash" data-hash={rev.contentHash}>
             Content hash <CopyHash hash={rev.contentHash} label="content hash" />
-            {rev.circulatedAt && <span>· circulated {when.format(new Date(rev.circulatedAt))} UTC{rev.circulatedBy ? ` by ${rev.circulatedBy}` : ""}</span>}
+          </p>
+        )}
+        {rev.circulatedAt && (
+          <p className="text-sm text-ink-soft">
+            Circulated {when.format(new Date(rev.circulatedAt))} UTC{rev.circulatedBy ? ` by ${rev.circulatedBy}` : ""}
           </p>
         )}
       </header>
