@@ -58,6 +58,15 @@ export async function readCapped(req: Request, limit: number): Promise<Uint8Arra
   return new Uint8Array(Buffer.concat(parts));
 }
 
+/**
+ * A small URL-encoded form (the sign-in forms), read through the cap so that neither a large
+ * Content-Length nor a chunked body without one is ever buffered past `limit`. Null when too large.
+ */
+export async function readSmallForm(req: Request, limit: number): Promise<URLSearchParams | null> {
+  const bytes = await readCapped(req, limit);
+  return bytes ? new URLSearchParams(new TextDecoder().decode(bytes)) : null;
+}
+
 /** Is the request sent from one of our own pages? Refuses a missing or foreign Origin and a cross-site fetch. */
 function originRefusal(req: Request, appOrigin: string): Response | null {
   if (req.headers.get("sec-fetch-site") === "cross-site") {

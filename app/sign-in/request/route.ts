@@ -1,5 +1,6 @@
 import { after } from "next/server";
 import { requestSignInLink } from "@/lib/auth";
+import { readSmallForm } from "@/lib/request-guard";
 import { clientIp, fromOurPages } from "@/lib/request-info";
 import { safeNext } from "@/lib/safe-next";
 import { signInSchema } from "@/models/schemas/people";
@@ -16,10 +17,10 @@ const seeOther = (location: string) => new Response(null, { status: 303, headers
  */
 export async function POST(req: Request) {
   if (!fromOurPages(req)) return new Response("This form only works from Placet's own sign-in page.", { status: 403 });
-  if (Number(req.headers.get("content-length") ?? 0) > FORM_LIMIT) return new Response("That form is too large.", { status: 413 });
-  const form = await req.formData().catch(() => null);
-  const raw = String(form?.get("email") ?? "");
-  const next = safeNext(String(form?.get("next") ?? ""));
+  const form = await readSmallForm(req, FORM_LIMIT);
+  if (!form) return new Response("That form is too large.", { status: 413 });
+  const raw = String(form.get("email") ?? "");
+  const next = safeNext(String(form.get("next") ?? ""));
   const parsed = signInSchema.safeParse({ email: raw });
   if (!parsed.success) {
     const back = new URLSearchParams({ email: raw.slice(0, 300) });

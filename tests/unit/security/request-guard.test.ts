@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { BODY_LIMITS, guardRequest, MAX_UPLOAD_REQUEST_BYTES } from "@/lib/request-guard";
+import { BODY_LIMITS, guardRequest, MAX_UPLOAD_REQUEST_BYTES, readSmallForm } from "@/lib/request-guard";
 
 const APP = "http://localhost:3000";
 const url = `${APP}/api/ballots/1/votes`;
@@ -78,5 +78,26 @@ describe("uploads keep their own limit", () => {
     const out = (await guardRequest(r, APP, "multipart")) as Response;
     expect(out.status).toBe(413);
     expect((await out.json()).fields.file).toMatch(/over the limit of 25 MB/);
+  });
+});
+
+describe("the sign-in forms' capped reader", () => {
+  const chunked = (bytes: number) =>
+    new ReadableStream<Uint8Array>({
+      start(c) {
+        for (let sent = 0; sent < bytes; sent += 1024) c.enqueue(new TextEncoder().encode("a".repeat(1024)));
+        c.close();
+      },
+    });
+
+  it("reads a small URL-encoded form (WHATWG URL Standard, application/x-www-form-urlencoded)", async () => {
+    const form = await readSmallForm(req("POST", { "content-type": "application/x-www-form-urlencoded" }, "email=a%40b.test&next="), 8192);
+    expect(form?.get("email")).toBe("a@b.test");
+  });
+
+  it("stops a chunked body with no Content-Length once it passes the cap (OWASP ASVS 4.0.3 V12.1.1)", async () => {
+    const r = req("POST", { "content-type": "application/x-www-form-urlencoded" }, chunked(64 * 1024));
+    expect(r.headers.get("content-length")).toBeNull();
+    expect(await readSmallForm(r, 8192)).toBeNull();
   });
 });
